@@ -1,0 +1,45 @@
+package org.tautline.driver.sweep;
+
+import java.util.List;
+
+import org.tautline.analysis.frf.Frf;
+import org.tautline.analysis.frf.FrfQuantity;
+
+/**
+ * The outcome of a stepped-sine sweep: every completed step, in the order run.
+ *
+ * @param plan the plan that was run
+ * @param responseQuantity what the response channel measured: displacement, velocity or acceleration
+ * @param points completed steps (all of them when {@code completed}, those before the stop otherwise)
+ * @param rigTimeS rig time the sweep took, ramps included, s
+ * @param completed true when every planned step was run, false after a cancel
+ */
+public record SweepRecord(SteppedSinePlan plan, String responseQuantity, List<SweepPoint> points, double rigTimeS,
+                          boolean completed) {
+
+    /** Copies the list so the record stays immutable. */
+    public SweepRecord {
+        points = List.copyOf(points);
+    }
+
+    /**
+     * The FRF of the completed steps, with each step's relative residual as its quality figure.
+     *
+     * @return the FRF in the quantity of the response channel (receptance for displacement)
+     */
+    public Frf toFrf() {
+        int n = points.size();
+        double[] f = new double[n];
+        double[] re = new double[n];
+        double[] im = new double[n];
+        double[] quality = new double[n];
+        for (int i = 0; i < n; i++) {
+            SweepPoint p = points.get(i);
+            f[i] = p.frequencyHz();
+            re[i] = p.response().getReal();
+            im[i] = p.response().getImaginary();
+            quality[i] = p.relativeResidual();
+        }
+        return Frf.of(f, re, im, null, quality, FrfQuantity.forResponse(responseQuantity));
+    }
+}
