@@ -111,6 +111,29 @@ class PeakPickingTest {
     }
 
     @Test
+    void forcingAtAThirdOfTheSpanLeavesOutModesThreeAndSix() {
+        // checks.md point-force entry [seen]: a node at the forcing point (x_f = L/3) removes n = 3, 6.
+        List<Mode> truth = new ArrayList<>();
+        for (int n = 1; n <= 6; n++) {
+            double a = StringPhysics.modeShape(n, 1.0 / 3, 1, MU) * StringPhysics.modeShape(n, 0.13, 1, MU);
+            truth.add(new Mode(StringPhysics.stiffStringFrequencyHz(n, F0, B, EndCondition.PINNED), ZETA,
+                    new Complex(a, 0)));
+        }
+        Frf clean = ModalSynthesis.receptance(truth, steppedSineLines());
+        double[] s = new double[clean.size()];
+        for (int i = 0; i < s.length; i++) {
+            s[i] = clean.magnitude(i) * Math.pow(10, -40.0 / 20);
+        }
+        List<PeakEstimate> found = PeakPicking.estimate(withNoise(clean, new Random(5L), s));
+        int[] present = {1, 2, 4, 5};
+        assertEquals(4, found.size(), "modes 1, 2, 4, 5 only; found " + PeakPicking.modes(found));
+        for (int k = 0; k < 4; k++) {
+            double expected = truth.get(present[k] - 1).frequencyHz();
+            assertEquals(expected, found.get(k).mode().frequencyHz(), 1e-3 * expected, "mode " + present[k]);
+        }
+    }
+
+    @Test
     void reportsNothingOnPureNoise() {
         Random random = new Random(3L);
         for (int trial = 0; trial < 20; trial++) {
