@@ -41,6 +41,9 @@ public record Verdict(Outcome outcome, List<LimitResult> results, List<String> r
         if (outcome == null) {
             throw new AnalysisException("a verdict needs an outcome, got none");
         }
+        if (results == null || reasons == null) {
+            throw new AnalysisException("a verdict needs its limit results and reasons, got none");
+        }
         results = List.copyOf(results);
         reasons = List.copyOf(reasons);
     }
