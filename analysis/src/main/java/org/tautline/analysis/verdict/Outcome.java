@@ -1,0 +1,11 @@
+package org.tautline.analysis.verdict;
+
+/** The result of checking one measured figure, or a whole specimen, against its limits. */
+public enum Outcome {
+    /** The measured value with its expanded uncertainty lies inside the limits. */
+    PASS,
+    /** The measured value with its expanded uncertainty lies wholly outside the limits. */
+    FAIL,
+    /** The uncertainty interval straddles a bound, or the figure was not measured: no decision can be made. */
+    NOT_DETERMINABLE
+}

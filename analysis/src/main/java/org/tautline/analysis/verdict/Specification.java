@@ -1,0 +1,30 @@
+package org.tautline.analysis.verdict;
+
+import java.util.List;
+
+import org.tautline.analysis.AnalysisException;
+
+/**
+ * A named set of acceptance limits that a specimen must meet.
+ *
+ * @param name the specification's name, for example a part number and revision
+ * @param limits the limits, at least one; copied
+ */
+public record Specification(String name, List<Limit> limits) {
+
+    /** Checks the name and copies the limits. */
+    public Specification {
+        if (name == null || name.isBlank()) {
+            throw new AnalysisException("a specification needs a name, got " + (name == null ? "none" : "a blank name"));
+        }
+        if (limits == null || limits.isEmpty()) {
+            throw new AnalysisException("specification '" + name + "' needs at least one limit, got none");
+        }
+        for (int i = 0; i < limits.size(); i++) {
+            if (limits.get(i) == null) {
+                throw new AnalysisException("specification '" + name + "' limit " + i + " is missing");
+            }
+        }
+        limits = List.copyOf(limits);
+    }
+}

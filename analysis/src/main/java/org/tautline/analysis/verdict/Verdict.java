@@ -1,0 +1,131 @@
+package org.tautline.analysis.verdict;
+
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+
+import org.tautline.analysis.AnalysisException;
+
+/**
+ * The pass/fail verdict of a specimen against a specification, with one reason per limit.
+ *
+ * <p>Decision rule (guard band by the expanded uncertainty): for each limit the measured value v
+ * with standard uncertainty u gives the expanded uncertainty U = k u with coverage factor k = 2
+ * (JCGM 100:2008, "Evaluation of measurement data - Guide to the expression of uncertainty in
+ * measurement", section 6, about 95 % coverage for a normal distribution). The limit is
+ * <ul>
+ *   <li>{@link Outcome#PASS} when the whole interval [v - U, v + U] lies inside the limits (bounds inclusive);</li>
+ *   <li>{@link Outcome#FAIL} when the whole interval lies outside them;</li>
+ *   <li>{@link Outcome#NOT_DETERMINABLE} when the interval straddles a bound, or the figure was not measured,
+ *       or it was measured in another unit.</li>
+ * </ul>
+ * This is the conformity and non-conformity zone rule of ISO 14253-1:2017, "Geometrical product
+ * specifications (GPS) - Inspection by measurement of workpieces and measuring equipment - Part 1:
+ * Decision rules for verifying conformity or nonconformity with specifications" (from memory), with
+ * the uncertainty range in between left undecided. The overall outcome is FAIL if any limit fails,
+ * else NOT_DETERMINABLE if any limit is undecided, else PASS.
+ *
+ * @param outcome the overall outcome
+ * @param results one result per limit, in the specification's order
+ * @param reasons one plain sentence per limit, in the same order
+ */
+public record Verdict(Outcome outcome, List<LimitResult> results, List<String> reasons) {
+
+    /** The coverage factor k applied to the standard uncertainty: U = k u. */
+    public static final double COVERAGE_FACTOR = 2.0;
+
+    /** Copies the lists. */
+    public Verdict {
+        if (outcome == null) {
+            throw new AnalysisException("a verdict needs an outcome, got none");
+        }
+        if (results == null || reasons == null) {
+            throw new AnalysisException("a verdict needs its limit results and reasons, got none");
+        }
+        results = List.copyOf(results);
+        reasons = List.copyOf(reasons);
+    }
+
+    /**
+     * Checks measured figures against a specification.
+     *
+     * @param specification the limits
+     * @param measurements measured figures by key (for example {@code "tensionN"}); figures the
+     *                     specification does not mention are ignored
+     * @return the verdict with one result and one reason per limit
+     */
+    public static Verdict evaluate(Specification specification, Map<String, Measurement> measurements) {
+        if (specification == null) {
+            throw new AnalysisException("a verdict needs a specification, got none");
+        }
+        if (measurements == null) {
+            throw new AnalysisException("a verdict needs the measured figures (an empty map when none), got none");
+        }
+        List<LimitResult> results = new ArrayList<>();
+        List<String> reasons = new ArrayList<>();
+        boolean anyFail = false;
+        boolean anyUndecided = false;
+        for (Limit limit : specification.limits()) {
+            LimitResult result = check(limit, measurements.get(limit.figureKey()));
+            results.add(result);
+            reasons.add(result.reason());
+            anyFail |= result.outcome() == Outcome.FAIL;
+            anyUndecided |= result.outcome() == Outcome.NOT_DETERMINABLE;
+        }
+        Outcome overall = anyFail ? Outcome.FAIL : anyUndecided ? Outcome.NOT_DETERMINABLE : Outcome.PASS;
+        return new Verdict(overall, results, reasons);
+    }
+
+    private static LimitResult check(Limit limit, Measurement measurement) {
+        String key = limit.figureKey();
+        if (measurement == null) {
+            return new LimitResult(limit, Double.NaN, Double.NaN, Double.NaN, Outcome.NOT_DETERMINABLE,
+                    "no measured value for " + key);
+        }
+        double v = measurement.value();
+        double u = measurement.standardUncertainty();
+        if (!measurement.unit().equals(limit.unit())) {
+            return new LimitResult(limit, v, u, Double.NaN, Outcome.NOT_DETERMINABLE,
+                    key + " was measured in '" + measurement.unit() + "' but the limit '" + limit.name()
+                            + "' is in '" + limit.unit() + "'");
+        }
+        double expanded = COVERAGE_FACTOR * u;
+        double margin = limit.marginOf(v);
+        String unit = withUnit("", limit.unit());
+        String stated = key + " = " + number(v) + " ± " + number(expanded) + unit + " (k = 2)";
+        String range = range(limit);
+        String marginText = " (margin " + number(margin) + unit + ")";
+        if (margin >= expanded) {
+            return new LimitResult(limit, v, u, margin, Outcome.PASS, stated + " is inside " + range + marginText);
+        }
+        if (margin < -expanded) {
+            return new LimitResult(limit, v, u, margin, Outcome.FAIL, stated + " is outside " + range + marginText);
+        }
+        return new LimitResult(limit, v, u, margin, Outcome.NOT_DETERMINABLE,
+                stated + " straddles a bound of " + range + marginText + ": the uncertainty is too large to decide");
+    }
+
+    private static String range(Limit limit) {
+        if (limit.hasLowerBound() && limit.hasUpperBound()) {
+            return number(limit.lowerBound()) + " .. " + withUnit(number(limit.upperBound()), limit.unit());
+        }
+        if (limit.hasLowerBound()) {
+            return "at least " + withUnit(number(limit.lowerBound()), limit.unit());
+        }
+        return "at most " + withUnit(number(limit.upperBound()), limit.unit());
+    }
+
+    private static String withUnit(String text, String unit) {
+        return unit.isEmpty() ? text : text + " " + unit;
+    }
+
+    /** Six significant digits, trailing zeros dropped, never exponent notation: 151.2, 8.8, 140. */
+    static String number(double value) {
+        if (value == 0) {
+            return "0";
+        }
+        return new BigDecimal(value).round(new MathContext(6)).stripTrailingZeros().toPlainString();
+    }
+}
