@@ -1,0 +1,385 @@
+package org.tautline.driver.sim;
+
+/**
+ * Time-stepping of specimen, shaker armature and accelerometer mass joined by rigid constraints.
+ *
+ * <p>Each modal coordinate and the armature advance by their exact state-transition matrices
+ * (exact discretisation of a linear oscillator, e.g. G. F. Franklin, J. D. Powell and M. L. Workman,
+ * Digital Control of Dynamic Systems, 3rd ed., Addison-Wesley 1998, ch. 4, from memory). The rigid
+ * stinger (armature displacement = specimen drive-direction displacement at x_f) and, if present,
+ * the accelerometer mass (its two displacements = the specimen's at x_s) are enforced as in the
+ * RATTLE method (H. C. Andersen, J. Comput. Phys. 52:24-34, 1983, from memory) with the exact flows
+ * in place of the free drift: an impulse at the start of each step, found from a small linear solve
+ * so the positions agree at the step's end, and a velocity projection at the end. Both solves use
+ * constant precomputed matrices, so a step is a few passes over plain arrays. Because the specimen
+ * sees only impulses at the step instants, the sampled response over the sampled transmitted force
+ * is the impulse-invariant image of the continuous receptance: it differs from it only by aliasing
+ * of the far-above-band response, (f/f_step)^2 small. The Kirchhoff-Carrier tension is applied
+ * explicitly from the previous step. Not thread-safe; the rig serialises access.
+ */
+final class RigDynamics {
+    private final int n;
+    private final int m;
+    private final double h;
+    private final double[] a11;
+    private final double[] a12;
+    private final double[] a21;
+    private final double[] a22;
+    private final double[][] g;
+    private final double[][] beta;
+    private final double[][] delta;
+    private final double[] sensor;
+    private final double[] kappa;
+    private final double[] omegaSquared;
+    private final double[] twoZetaOmega;
+    private final double[] sensorDotConstraint;
+    private final double[][] positionSolve;
+    private final double[][] velocityCoupling;
+    private final double[][] velocitySolve;
+    private final double[] bodyInverseMass;
+    private final double[] bodyPositionGain;
+    private final double[] bodyVelocityGain;
+    private final double arm11;
+    private final double arm12;
+    private final double arm21;
+    private final double arm22;
+    private final double driveForcePerV;
+    private final double forceConstant;
+    private final double resistance;
+    private final double distortion2;
+    private final double distortion3;
+    private final double tensionGainPerQ2;
+    private final double inverseLinearDensity;
+    private final boolean nonlinear;
+    private final boolean acceleration;
+
+    private final double[] qf;
+    private final double[] vf;
+    private final double[] lambda;
+    private final double[] mu;
+    private final double[] bodyPosition;
+    private final double[] bodyVelocity;
+    private final double[] residual;
+    private final double[] velocityResidual;
+    private final double[] sums = new double[4];
+    private double extraTensionN;
+    private double forceN;
+    private double response;
+
+    RigDynamics(SimulationConfig config, ModalModel model, double stepS) {
+        SimulatedSpecimen specimen = config.specimen();
+        ShakerModel shaker = config.shaker();
+        double accelerometerKg = config.sensors().accelerometerMassKg();
+        n = model.dofCount;
+        m = accelerometerKg > 0 ? 3 : 1;
+        h = stepS;
+        a11 = new double[n];
+        a12 = new double[n];
+        a21 = new double[n];
+        a22 = new double[n];
+        omegaSquared = new double[n];
+        twoZetaOmega = new double[n];
+        for (int i = 0; i < n; i++) {
+            double w = model.omega(i);
+            double z = model.dampingRatio[i];
+            double wd = w * Math.sqrt(1.0 - z * z);
+            double decay = Math.exp(-z * w * h);
+            double c = Math.cos(wd * h);
+            double s = Math.sin(wd * h);
+            a11[i] = decay * (c + z * w / wd * s);
+            a12[i] = decay * s / wd;
+            a21[i] = -decay * w * w / wd * s;
+            a22[i] = decay * (c - z * w / wd * s);
+            omegaSquared[i] = w * w;
+            twoZetaOmega[i] = 2.0 * z * w;
+        }
+        g = new double[m][];
+        g[0] = model.driveProjection.clone();
+        if (m == 3) {
+            g[1] = model.sensorPointDrive.clone();
+            g[2] = model.sensorPointCross.clone();
+        }
+        beta = new double[m][n];
+        delta = new double[m][n];
+        for (int j = 0; j < m; j++) {
+            for (int i = 0; i < n; i++) {
+                beta[j][i] = a12[i] * g[j][i];
+                delta[j][i] = a22[i] * g[j][i];
+            }
+        }
+        sensor = model.sensorProjection.clone();
+        kappa = model.wavenumberSquared.clone();
+        double[][] arm = StateTransition.oscillator(shaker.movingMassKg(), shaker.suspensionStiffnessNPerM(),
+                shaker.suspensionDampingNsPerM() + shaker.backEmfDampingNsPerM(), h);
+        arm11 = arm[0][0];
+        arm12 = arm[0][1];
+        arm21 = arm[1][0];
+        arm22 = arm[1][1];
+        bodyInverseMass = new double[m];
+        bodyPositionGain = new double[m];
+        bodyVelocityGain = new double[m];
+        bodyInverseMass[0] = 1.0 / shaker.movingMassKg();
+        bodyPositionGain[0] = arm12 * bodyInverseMass[0];
+        bodyVelocityGain[0] = arm22 * bodyInverseMass[0];
+        for (int j = 1; j < m; j++) {
+            bodyInverseMass[j] = 1.0 / accelerometerKg;
+            bodyPositionGain[j] = h * bodyInverseMass[j];
+            bodyVelocityGain[j] = bodyInverseMass[j];
+        }
+        double[][] position = new double[m][m];
+        velocityCoupling = new double[m][m];
+        double[][] velocity = new double[m][m];
+        sensorDotConstraint = new double[m];
+        for (int j = 0; j < m; j++) {
+            for (int l = 0; l < m; l++) {
+                double sp = 0;
+                double sv = 0;
+                double sk = 0;
+                for (int i = 0; i < n; i++) {
+                    double gg = g[j][i] * g[l][i];
+                    sp += a12[i] * gg;
+                    sv += a22[i] * gg;
+                    sk += gg;
+                }
+                position[j][l] = sp + (j == l ? bodyPositionGain[j] : 0.0);
+                velocityCoupling[j][l] = sv + (j == l ? bodyVelocityGain[j] : 0.0);
+                velocity[j][l] = sk + (j == l ? bodyInverseMass[j] : 0.0);
+            }
+            double sc = 0;
+            for (int i = 0; i < n; i++) {
+                sc += sensor[i] * g[j][i];
+            }
+            sensorDotConstraint[j] = sc;
+        }
+        positionSolve = StateTransition.inverse(position);
+        velocitySolve = StateTransition.inverse(velocity);
+        driveForcePerV = shaker.forceConstantNPerA() / shaker.coilResistanceOhm();
+        forceConstant = shaker.forceConstantNPerA();
+        resistance = shaker.coilResistanceOhm();
+        double referenceCurrentA = config.maxDriveV() / shaker.coilResistanceOhm();
+        distortion2 = 2.0 * shaker.secondHarmonicDistortion() / referenceCurrentA;
+        distortion3 = 4.0 * shaker.thirdHarmonicDistortion() / (referenceCurrentA * referenceCurrentA);
+        nonlinear = specimen.geometricNonlinearity();
+        inverseLinearDensity = 1.0 / specimen.linearDensityKgPerM();
+        tensionGainPerQ2 = specimen.axialStiffnessN() / (2.0 * specimen.lengthM()) * inverseLinearDensity;
+        acceleration = config.sensors().responseSensor() == ResponseSensor.ACCELERATION;
+        qf = new double[n];
+        vf = new double[n];
+        lambda = new double[m];
+        mu = new double[m];
+        bodyPosition = new double[m];
+        bodyVelocity = new double[m];
+        residual = new double[m];
+        velocityResidual = new double[m];
+    }
+
+    /**
+     * Advances one internal step from t_k to t_k + h under the drive voltage V(t_k).
+     *
+     * <p>Afterwards {@link #forceN()} and {@link #response()} hold the transducer values at t_k.
+     *
+     * @param driveV coil voltage at the step's start, V
+     */
+    void step(double driveV) {
+        double kick = nonlinear ? h * extraTensionN * inverseLinearDensity : 0.0;
+        double displacement = 0;
+        double accelerationSum = 0;
+        double stretch = 0;
+        double curvatureSum = 0;
+        for (int j = 0; j < m; j++) {
+            residual[j] = 0;
+            velocityResidual[j] = 0;
+        }
+        if (m == 1) {
+            stepSingleConstraint(kick);
+            finishSingleConstraint(driveV);
+            return;
+        } else {
+            for (int i = 0; i < n; i++) {
+                double q = qf[i];
+                double v = vf[i];
+                for (int j = 0; j < m; j++) {
+                    q += beta[j][i] * lambda[j];
+                    v += delta[j][i] * lambda[j] + g[j][i] * mu[j];
+                }
+                double c = sensor[i];
+                displacement += c * q;
+                double kq = kappa[i] * q;
+                stretch += kq * q;
+                if (acceleration) {
+                    accelerationSum -= c * (omegaSquared[i] * q + twoZetaOmega[i] * v);
+                    curvatureSum += c * kq;
+                }
+                v -= kick * kq;
+                double qn = a11[i] * q + a12[i] * v;
+                double vn = a21[i] * q + a22[i] * v;
+                for (int j = 0; j < m; j++) {
+                    residual[j] += g[j][i] * qn;
+                    velocityResidual[j] += g[j][i] * vn;
+                }
+                qf[i] = qn;
+                vf[i] = vn;
+            }
+        }
+        double forceAtStart = mu[0];
+        double[] previousMu = m == 1 ? null : mu.clone();
+        advanceBodies(driveV);
+        for (int j = 0; j < m; j++) {
+            double sum = 0;
+            for (int l = 0; l < m; l++) {
+                sum += positionSolve[j][l] * (bodyPosition[l] - residual[l]);
+            }
+            lambda[j] = sum;
+        }
+        for (int j = 0; j < m; j++) {
+            bodyPosition[j] -= bodyPositionGain[j] * lambda[j];
+            bodyVelocity[j] -= bodyVelocityGain[j] * lambda[j];
+            double coupled = 0;
+            for (int l = 0; l < m; l++) {
+                coupled += velocityCoupling[j][l] * lambda[l];
+            }
+            // velocityCoupling already includes the body's share, so undo it from the body side once.
+            velocityResidual[j] += coupled - bodyVelocityGain[j] * lambda[j];
+        }
+        for (int j = 0; j < m; j++) {
+            double sum = 0;
+            for (int l = 0; l < m; l++) {
+                sum += velocitySolve[j][l] * (bodyVelocity[l] - velocityResidual[l]);
+            }
+            mu[j] = sum;
+        }
+        for (int j = 0; j < m; j++) {
+            bodyVelocity[j] -= bodyInverseMass[j] * mu[j];
+        }
+        forceN = (forceAtStart + lambda[0]) / h;
+        if (acceleration) {
+            double a = accelerationSum - extraTensionN * inverseLinearDensity * curvatureSum;
+            for (int j = 0; j < m; j++) {
+                double impulse = lambda[j] + (m == 1 ? forceAtStart : previousMu[j]);
+                a += sensorDotConstraint[j] * impulse / h;
+            }
+            response = a;
+        } else {
+            response = displacement;
+        }
+        extraTensionN = nonlinear ? tensionGainPerQ2 * stretch : 0.0;
+    }
+
+    /**
+     * The modal pass for the stinger-only case, two coordinates (both polarisations of one harmonic) per
+     * iteration with separate partial sums so the additions do not wait on each other.
+     */
+    private void stepSingleConstraint(double kick) {
+        double[] g0 = g[0];
+        double[] b0 = beta[0];
+        double[] d0 = delta[0];
+        double l0 = lambda[0];
+        double u0 = mu[0];
+        double dispA = 0;
+        double dispB = 0;
+        double accA = 0;
+        double accB = 0;
+        double strA = 0;
+        double strB = 0;
+        double curA = 0;
+        double curB = 0;
+        double rA = 0;
+        double rB = 0;
+        double sA = 0;
+        double sB = 0;
+        for (int i = 0; i < n; i += 2) {
+            int k = i + 1;
+            double qa = qf[i] + b0[i] * l0;
+            double qb = qf[k] + b0[k] * l0;
+            double va = vf[i] + d0[i] * l0 + g0[i] * u0;
+            double vb = vf[k] + d0[k] * l0 + g0[k] * u0;
+            double ca = sensor[i];
+            double cb = sensor[k];
+            dispA += ca * qa;
+            dispB += cb * qb;
+            double kqa = kappa[i] * qa;
+            double kqb = kappa[k] * qb;
+            strA += kqa * qa;
+            strB += kqb * qb;
+            if (acceleration) {
+                accA -= ca * (omegaSquared[i] * qa + twoZetaOmega[i] * va);
+                accB -= cb * (omegaSquared[k] * qb + twoZetaOmega[k] * vb);
+                curA += ca * kqa;
+                curB += cb * kqb;
+            }
+            va -= kick * kqa;
+            vb -= kick * kqb;
+            double qna = a11[i] * qa + a12[i] * va;
+            double qnb = a11[k] * qb + a12[k] * vb;
+            double vna = a21[i] * qa + a22[i] * va;
+            double vnb = a21[k] * qb + a22[k] * vb;
+            rA += g0[i] * qna;
+            rB += g0[k] * qnb;
+            sA += g0[i] * vna;
+            sB += g0[k] * vnb;
+            qf[i] = qna;
+            qf[k] = qnb;
+            vf[i] = vna;
+            vf[k] = vnb;
+        }
+        residual[0] = rA + rB;
+        velocityResidual[0] = sA + sB;
+        sums[0] = dispA + dispB;
+        sums[1] = accA + accB;
+        sums[2] = strA + strB;
+        sums[3] = curA + curB;
+    }
+
+    /** The constraint solves and outputs for the stinger-only case, in scalars. */
+    private void finishSingleConstraint(double driveV) {
+        double forceAtStart = mu[0];
+        advanceBodies(driveV);
+        double l0 = positionSolve[0][0] * (bodyPosition[0] - residual[0]);
+        double y = bodyPosition[0] - bodyPositionGain[0] * l0;
+        double vy = bodyVelocity[0] - bodyVelocityGain[0] * l0;
+        double stringVelocity = velocityResidual[0] + (velocityCoupling[0][0] - bodyVelocityGain[0]) * l0;
+        double u0 = velocitySolve[0][0] * (vy - stringVelocity);
+        bodyPosition[0] = y;
+        bodyVelocity[0] = vy - bodyInverseMass[0] * u0;
+        lambda[0] = l0;
+        mu[0] = u0;
+        double impulse = forceAtStart + l0;
+        forceN = impulse / h;
+        if (acceleration) {
+            response = sums[1] - extraTensionN * inverseLinearDensity * sums[3] + sensorDotConstraint[0] * forceN;
+        } else {
+            response = sums[0];
+        }
+        extraTensionN = nonlinear ? tensionGainPerQ2 * sums[2] : 0.0;
+    }
+
+    /** Kicks the armature with the coil force over the step and lets armature and accelerometer mass run free. */
+    private void advanceBodies(double driveV) {
+        double velocity = bodyVelocity[0];
+        double currentA = (driveV - forceConstant * velocity) / resistance;
+        double impulse = h * (driveForcePerV * driveV
+                + forceConstant * currentA * currentA * (distortion2 + distortion3 * currentA));
+        velocity += impulse * bodyInverseMass[0];
+        double y = bodyPosition[0];
+        bodyPosition[0] = arm11 * y + arm12 * velocity;
+        bodyVelocity[0] = arm21 * y + arm22 * velocity;
+        for (int j = 1; j < m; j++) {
+            bodyPosition[j] += h * bodyVelocity[j];
+        }
+    }
+
+    /** @return force into the specimen at the last step's start, N */
+    double forceN() {
+        return forceN;
+    }
+
+    /** @return response (displacement m or acceleration m/s^2) at the last step's start */
+    double response() {
+        return response;
+    }
+
+    /** @return the Kirchhoff-Carrier tension increase at the last step's start, N */
+    double extraTensionN() {
+        return extraTensionN;
+    }
+}
