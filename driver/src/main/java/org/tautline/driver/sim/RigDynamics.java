@@ -13,8 +13,13 @@ package org.tautline.driver.sim;
  * so the positions agree at the step's end, and a velocity projection at the end. Both solves use
  * constant precomputed matrices, so a step is a few passes over plain arrays. Because the specimen
  * sees only impulses at the step instants, the sampled response over the sampled transmitted force
- * is the impulse-invariant image of the continuous receptance: it differs from it only by aliasing
- * of the far-above-band response, (f/f_step)^2 small. The Kirchhoff-Carrier tension is applied
+ * is the impulse-invariant image of the continuous receptance (A. V. Oppenheim and R. W. Schafer,
+ * Discrete-Time Signal Processing, 3rd ed., Pearson 2010, section 7.2, from memory): it differs from it
+ * only by the aliased images sum over l != 0 of H(w + l w_s). Above every mode each image is close to
+ * the mass line -S/(w + l w_s)^2 with S the sum of the modal constants, and sum over l != 0 of
+ * 1/(l w_s)^2 = pi^2/(3 w_s^2); the displacement output adds S pi^2/(3 w_s^2) times the force to
+ * cancel that leading part, leaving an error of order (f/f_step)^2 smaller still. The Kirchhoff-Carrier
+ * tension is applied
  * explicitly from the previous step. Not thread-safe; the rig serialises access.
  */
 final class RigDynamics {
@@ -52,6 +57,7 @@ final class RigDynamics {
     private final double inverseLinearDensity;
     private final boolean nonlinear;
     private final boolean acceleration;
+    private final double aliasCorrection;
 
     private final double[] qf;
     private final double[] vf;
@@ -163,6 +169,13 @@ final class RigDynamics {
         inverseLinearDensity = 1.0 / specimen.linearDensityKgPerM();
         tensionGainPerQ2 = specimen.axialStiffnessN() / (2.0 * specimen.lengthM()) * inverseLinearDensity;
         acceleration = config.sensors().responseSensor() == ResponseSensor.ACCELERATION;
+        double modalConstantSum = 0;
+        for (int i = 0; i < n; i++) {
+            modalConstantSum += sensor[i] * g[0][i];
+        }
+        double stepRateRadPerS = 2.0 * Math.PI / h;
+        aliasCorrection = m == 1 && !acceleration
+                ? modalConstantSum * Math.PI * Math.PI / (3.0 * stepRateRadPerS * stepRateRadPerS) : 0.0;
         qf = new double[n];
         vf = new double[n];
         lambda = new double[m];
@@ -348,7 +361,7 @@ final class RigDynamics {
         if (acceleration) {
             response = sums[1] - extraTensionN * inverseLinearDensity * sums[3] + sensorDotConstraint[0] * forceN;
         } else {
-            response = sums[0];
+            response = sums[0] + aliasCorrection * forceN;
         }
         extraTensionN = nonlinear ? tensionGainPerQ2 * sums[2] : 0.0;
     }

@@ -57,7 +57,8 @@ final class SensorChannel {
             x += noiseStd * random.nextGaussian();
         }
         for (int k = 0; k < humAmplitude.length; k++) {
-            double phase = Math.IEEEremainder(humRadPerSample[k] * sampleIndex, 2.0 * Math.PI);
+            double turns = humRadPerSample[k] * sampleIndex / (2.0 * Math.PI);
+            double phase = 2.0 * Math.PI * (turns - Math.floor(turns));
             x += humAmplitude[k] * Math.sin(phase + humPhaseRad[k]);
         }
         double code = Math.rint(x / stepSize);

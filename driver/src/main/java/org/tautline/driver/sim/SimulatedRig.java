@@ -22,7 +22,7 @@ import org.tautline.driver.spi.SampleBlock;
  */
 public final class SimulatedRig implements Rig {
     /** Internal integration rate the rig aims at, Hz: internal steps per sample = ceil(this / sample rate). */
-    static final double INTERNAL_RATE_HZ = 40000.0;
+    static final double INTERNAL_RATE_HZ = 20000.0;
 
     private final SimulationConfig config;
     private final SimulationTruth truth;

@@ -4,8 +4,11 @@ import org.tautline.analysis.specimen.EndCondition;
 
 /** Ready-made simulation scenarios. */
 public final class SimulationConfigs {
-    /** Recommended peak drive for the demo wire, V: clean resonances, nearly linear string. */
-    public static final double DEMO_DRIVE_V = 1.0;
+    /**
+     * Recommended peak drive for the demo wire, V: at the fundamental about 21 micrometres at the sensor
+     * and 27 at midspan, with a fundamental force SNR above 50 dB over a 1 s record.
+     */
+    public static final double DEMO_DRIVE_V = 0.5;
 
     private SimulationConfigs() {
     }
@@ -18,7 +21,8 @@ public final class SimulationConfigs {
      * about 0.35 % at the fundamental; polarisation split 0.15 % with principal axis 1 at 25 degrees to
      * the drive; Kirchhoff-Carrier nonlinearity on with EA = 39 000 N (steel core). Stinger at 0.07 m,
      * non-contact displacement sensor at 0.43 m along the drive direction. Shaker: 0.02 kg, 2000 N/m,
-     * 1.0 N s/m, Bl 3 N/A, 4 ohm, 0.1 % second and 0.05 % third harmonic. Noise 2e-5 N/sqrt(Hz) and
+     * 1.0 N s/m, Bl 3 N/A, 4 ohm, 0.1 % second and 0.05 % third harmonic. Noise 1e-6 N/sqrt(Hz) (a sensitive
+     * piezoelectric force sensor: the heavy armature nearly pins the wire, so the force at resonance is small) and
      * 2e-10 m/sqrt(Hz); full scales 5 N and 1e-3 m on 24-bit ADCs; 50 Hz hum of 2e-9 m with 3
      * harmonics; 20 kS/s; drive limit 10 V. See {@link #DEMO_DRIVE_V} for the drive level.
      *
@@ -28,7 +32,7 @@ public final class SimulationConfigs {
         SimulatedSpecimen wire = new SimulatedSpecimen(0.60, 2.0e-3, 150.0, 6.14e-4, EndCondition.PINNED, 30,
                 DampingModel.of(0.003, 0.001, 100.0, 0.0002, 1000.0), 0.0015, Math.toRadians(25.0), true, 39000.0);
         ShakerModel shaker = new ShakerModel(0.02, 2000.0, 1.0, 3.0, 4.0, 0.001, 0.0005);
-        SensorSetup sensors = new SensorSetup(0.07, 0.43, ResponseSensor.DISPLACEMENT, 0.0, 0.0, 2e-5, 2e-10, 5.0,
+        SensorSetup sensors = new SensorSetup(0.07, 0.43, ResponseSensor.DISPLACEMENT, 0.0, 0.0, 1e-6, 2e-10, 5.0,
                 1e-3, 24, 50.0, 2e-9, 3);
         return new SimulationConfig(wire, shaker, sensors, SimulationConfig.DEFAULT_SAMPLE_RATE_HZ, 1L, 10.0);
     }
