@@ -5,10 +5,12 @@ import org.tautline.analysis.specimen.EndCondition;
 /** Ready-made simulation scenarios. */
 public final class SimulationConfigs {
     /**
-     * Recommended peak drive for the demo wire, V: at the fundamental about 21 micrometres at the sensor
-     * and 27 at midspan, with a fundamental force SNR above 50 dB over a 1 s record.
+     * Recommended peak drive for the demo wire, V: at the fundamental about 41 micrometres at the sensor
+     * and 53 at midspan (Kirchhoff-Carrier frequency shift about 2e-6), and force SNR above 40 dB over
+     * 1 s records at the first six resonances. Below about 150 Hz the shaker's own suspension resonance
+     * (near 50 Hz) moves the wire more; start sweeps above it.
      */
-    public static final double DEMO_DRIVE_V = 0.5;
+    public static final double DEMO_DRIVE_V = 1.0;
 
     private SimulationConfigs() {
     }
