@@ -23,6 +23,8 @@ import org.tautline.driver.spi.SampleBlock;
 public final class SimulatedRig implements Rig {
     /** Internal integration rate the rig aims at, Hz: internal steps per sample = ceil(this / sample rate). */
     static final double INTERNAL_RATE_HZ = 20000.0;
+    /** Internal rate with an accelerometer, Hz: its second difference needs finer steps. */
+    static final double ACCELEROMETER_RATE_HZ = 80000.0;
 
     private final SimulationConfig config;
     private final SimulationTruth truth;
@@ -31,6 +33,7 @@ public final class SimulatedRig implements Rig {
     private final SensorChannel responseChannel;
     private final List<ChannelInfo> channels;
     private final int substeps;
+    private final int sampledSubstep;
     private final double sampleRateHz;
     private final SimExciter exciter = new SimExciter();
     private final SimAcquisition acquisition = new SimAcquisition();
@@ -50,7 +53,10 @@ public final class SimulatedRig implements Rig {
     public SimulatedRig(SimulationConfig config) {
         this.config = Checks.present("SimulatedRig", "config", config);
         this.sampleRateHz = config.sampleRateHz();
-        this.substeps = (int) Math.ceil(INTERNAL_RATE_HZ / sampleRateHz - 1e-9);
+        boolean accelerometer = config.sensors().responseSensor() == ResponseSensor.ACCELERATION;
+        this.substeps = (int) Math.ceil((accelerometer ? ACCELEROMETER_RATE_HZ : INTERNAL_RATE_HZ) / sampleRateHz
+                - 1e-9);
+        this.sampledSubstep = accelerometer ? 1 : 0;
         ModalModel model = new ModalModel(config);
         this.truth = SimulationTruth.of(config);
         this.dynamics = new RigDynamics(config, model, 1.0 / (sampleRateHz * substeps));
@@ -148,7 +154,7 @@ public final class SimulatedRig implements Rig {
                     phaseRad -= 2.0 * Math.PI;
                 }
                 dynamics.step(v);
-                if (s == 0 && out != null) {
+                if (s == sampledSubstep && out != null) {
                     out[0][k] = forceChannel.acquire(dynamics.forceN(), nextSampleIndex);
                     out[1][k] = responseChannel.acquire(dynamics.response(), nextSampleIndex);
                 }
