@@ -94,17 +94,18 @@ public record Verdict(Outcome outcome, List<LimitResult> results, List<String> r
         double expanded = COVERAGE_FACTOR * u;
         double margin = limit.marginOf(v);
         String unit = withUnit("", limit.unit());
-        String stated = key + " = " + number(v) + " ± " + number(expanded) + unit + " (k = 2)";
+        String stated = u == 0 ? key + " = " + number(v) + unit
+                : key + " = " + number(v) + " ± " + number(expanded) + unit + " (k = 2)";
         String range = range(limit);
         String marginText = " (margin " + number(margin) + unit + ")";
         if (margin >= expanded) {
-            return new LimitResult(limit, v, u, margin, Outcome.PASS, stated + " is inside " + range + marginText);
+            return new LimitResult(limit, v, u, margin, Outcome.PASS, stated + " meets " + range + marginText);
         }
         if (margin < -expanded) {
-            return new LimitResult(limit, v, u, margin, Outcome.FAIL, stated + " is outside " + range + marginText);
+            return new LimitResult(limit, v, u, margin, Outcome.FAIL, stated + " does not meet " + range + marginText);
         }
         return new LimitResult(limit, v, u, margin, Outcome.NOT_DETERMINABLE,
-                stated + " straddles a bound of " + range + marginText + ": the uncertainty is too large to decide");
+                stated + " cannot be judged against " + range + marginText + ": the uncertainty is too large to decide");
     }
 
     private static String range(Limit limit) {

@@ -19,7 +19,7 @@ class VerdictTest {
         Verdict verdict = Verdict.evaluate(new Specification("wire W-1", List.of(TENSION)),
                 Map.of("tensionN", new Measurement(151.2, 0.4, "N")));
         assertEquals(Outcome.PASS, verdict.outcome());
-        assertEquals(List.of("tensionN = 151.2 ± 0.8 N (k = 2) is inside 140 .. 160 N (margin 8.8 N)"), verdict.reasons());
+        assertEquals(List.of("tensionN = 151.2 ± 0.8 N (k = 2) meets 140 .. 160 N (margin 8.8 N)"), verdict.reasons());
         LimitResult result = verdict.results().get(0);
         assertEquals(8.8, result.margin(), 1e-12, "margin = 160 - 151.2, distance to the nearest bound");
         assertEquals(0.8, result.expandedUncertainty(), 1e-15, "U = k u with k = 2 (JCGM 100:2008)");
@@ -30,7 +30,7 @@ class VerdictTest {
         Verdict verdict = Verdict.evaluate(new Specification("wire W-1", List.of(TENSION)),
                 Map.of("tensionN", new Measurement(135, 1, "N")));
         assertEquals(Outcome.FAIL, verdict.outcome());
-        assertEquals("tensionN = 135 ± 2 N (k = 2) is outside 140 .. 160 N (margin -5 N)", verdict.reasons().get(0));
+        assertEquals("tensionN = 135 ± 2 N (k = 2) does not meet 140 .. 160 N (margin -5 N)", verdict.reasons().get(0));
     }
 
     @Test
@@ -38,7 +38,7 @@ class VerdictTest {
         Verdict verdict = Verdict.evaluate(new Specification("wire W-1", List.of(TENSION)),
                 Map.of("tensionN", new Measurement(159.5, 0.5, "N")));
         assertEquals(Outcome.NOT_DETERMINABLE, verdict.outcome());
-        assertEquals("tensionN = 159.5 ± 1 N (k = 2) straddles a bound of 140 .. 160 N (margin 0.5 N): "
+        assertEquals("tensionN = 159.5 ± 1 N (k = 2) cannot be judged against 140 .. 160 N (margin 0.5 N): "
                 + "the uncertainty is too large to decide", verdict.reasons().get(0));
     }
 
@@ -56,14 +56,14 @@ class VerdictTest {
         Verdict undecided = Verdict.evaluate(spec, Map.of("tensionN", new Measurement(150, 0.1, "N"),
                 "zeta1", new Measurement(0.002, 0.0001, "")));
         assertEquals(Outcome.NOT_DETERMINABLE, undecided.outcome());
-        assertEquals(List.of("tensionN = 150 ± 0.2 N (k = 2) is inside 140 .. 160 N (margin 10 N)",
+        assertEquals(List.of("tensionN = 150 ± 0.2 N (k = 2) meets 140 .. 160 N (margin 10 N)",
                 "no measured value for f1Hz",
-                "zeta1 = 0.002 ± 0.0002 (k = 2) is inside at most 0.01 (margin 0.008)"), undecided.reasons());
+                "zeta1 = 0.002 ± 0.0002 (k = 2) meets at most 0.01 (margin 0.008)"), undecided.reasons());
 
         Verdict failed = Verdict.evaluate(spec, Map.of("tensionN", new Measurement(150, 0.1, "N"),
                 "f1Hz", new Measurement(120, 0.01, "Hz")));
         assertEquals(Outcome.FAIL, failed.outcome());
-        assertEquals("f1Hz = 120 ± 0.02 Hz (k = 2) is outside at least 140 Hz (margin -20 Hz)", failed.reasons().get(1));
+        assertEquals("f1Hz = 120 ± 0.02 Hz (k = 2) does not meet at least 140 Hz (margin -20 Hz)", failed.reasons().get(1));
         assertEquals(Outcome.NOT_DETERMINABLE, failed.results().get(2).outcome());
     }
 

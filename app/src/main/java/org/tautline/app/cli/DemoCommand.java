@@ -1,0 +1,68 @@
+package org.tautline.app.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.concurrent.Callable;
+
+import org.tautline.analysis.frf.FrfCsvWriter;
+import org.tautline.app.SafetyNotice;
+import org.tautline.app.qualify.DemoOutcome;
+import org.tautline.app.qualify.DemoRun;
+import org.tautline.app.qualify.ResultText;
+import org.tautline.driver.sweep.SweepListener;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code tautline demo}: qualifies the invented demo wire on the simulated rig. */
+@Command(name = "demo", mixinStandardHelpOptions = true,
+        description = "Qualify the built-in demo specimen (invented) on the simulated rig and compare every estimate"
+                + " with the simulated truth.")
+final class DemoCommand implements Callable<Integer> {
+    @Spec
+    private CommandSpec spec;
+
+    @Option(names = "--json", description = "Print the result as JSON on standard output (progress goes to standard error).")
+    private boolean json;
+
+    @Option(names = "--out", paramLabel = "DIR", description = "Write frf.csv, truth.json and result.json into DIR.")
+    private Path outDir;
+
+    @Option(names = "--no-progress", description = "Do not draw the progress bar.")
+    private boolean noProgress;
+
+    @Override
+    public Integer call() throws IOException {
+        PrintWriter out = spec.commandLine().getOut();
+        System.err.print(SafetyNotice.asText(true));
+        System.err.flush();
+        SweepListener progress = noProgress ? SweepListener.NONE : new ProgressBar(System.err, System.console() != null);
+        DemoOutcome outcome = DemoRun.run(progress, () -> Thread.currentThread().isInterrupted());
+        if (json) {
+            out.println(ResultJson.MAPPER.writeValueAsString(ResultJson.outcome(outcome)));
+        } else {
+            out.print(ResultText.format(outcome));
+        }
+        out.flush();
+        if (outDir != null) {
+            write(outcome, outDir);
+            System.err.println("tautline: wrote frf.csv, truth.json and result.json to " + outDir);
+        }
+        return 0;
+    }
+
+    private static void write(DemoOutcome outcome, Path dir) throws IOException {
+        Files.createDirectories(dir);
+        Map<String, String> metadata = new LinkedHashMap<>();
+        metadata.put("specimen", outcome.result().specimen().id());
+        metadata.put("source", "Tautline demo on the simulated rig (invented specimen)");
+        FrfCsvWriter.write(outcome.result().receptance(), metadata, dir.resolve("frf.csv"));
+        ResultJson.MAPPER.writeValue(dir.resolve("truth.json").toFile(), ResultJson.truth(outcome.truth()));
+        ResultJson.MAPPER.writeValue(dir.resolve("result.json").toFile(), ResultJson.outcome(outcome));
+    }
+}

@@ -1,0 +1,53 @@
+package org.tautline.app.qualify;
+
+import java.util.List;
+
+import org.tautline.analysis.specimen.EndCondition;
+import org.tautline.analysis.verdict.Limit;
+import org.tautline.analysis.verdict.Specification;
+import org.tautline.driver.sim.SimulationConfig;
+import org.tautline.driver.sim.SimulationConfigs;
+import org.tautline.driver.sweep.SteppedSinePlan;
+
+/**
+ * The built-in demo: an invented tie wire, its stated setup, its specification and its sweep plan.
+ *
+ * <p>Everything here is invented for the demo; it describes no real product and no data sheet.
+ */
+public final class DemoScenario {
+    private DemoScenario() {
+    }
+
+    /** @return the simulated rig's configuration: the wire as it really is in the simulation */
+    public static SimulationConfig simulation() {
+        return SimulationConfigs.demoWire();
+    }
+
+    /** @return what the technician states about the specimen (nominal values) */
+    public static SpecimenDescription specimen() {
+        return new SpecimenDescription("DEMO-TW-0042", "polymer-jacketed steel tie wire (invented demo specimen)",
+                0.60, 150.0, 2.0e-3, 0.02e-3, 0.07, 0.43, EndCondition.PINNED);
+    }
+
+    /** @return the demo specification: the limits the wire must meet */
+    public static Specification specification() {
+        return new Specification("demo tie wire, invented", List.of(
+                Limit.between("fundamental frequency", "f1Hz", "Hz", 215.0, 245.0),
+                Limit.between("tension", "tensionN", "N", 135.0, 165.0),
+                Limit.atMost("FRF standard error at resonances", "resonanceFrfRelativeStdError", "", 0.05)));
+    }
+
+    /**
+     * The demo sweep: log-spaced steps through the first six modes.
+     *
+     * <p>Steps 0.2 % apart put about four lines in each half-power band at zeta ~ 0.4 %; 250 cycles
+     * of settling let the slowest transient decay below -60 dB (6.9 time constants = 1.1/zeta
+     * cycles), then 100 whole cycles are fitted, enough to hold the FRF's standard error near 2 %
+     * at the resonances, where the force drops to a fraction of a millinewton per volt.
+     *
+     * @return the plan
+     */
+    public static SteppedSinePlan plan() {
+        return new SteppedSinePlan(180.0, 1500.0, 1061, 250, 0.02, 100, SimulationConfigs.DEMO_DRIVE_V, 0.2, 3);
+    }
+}
