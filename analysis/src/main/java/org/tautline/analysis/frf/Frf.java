@@ -10,8 +10,9 @@ import org.tautline.analysis.AnalysisException;
  * An immutable frequency-response function: response per unit force at a set of frequency lines.
  *
  * <p>Lines are strictly increasing and may be non-uniform (stepped sine). Values are complex with
- * e^{j w t} time dependence. Optional per-line coherence (0..1) and per-line quality figure (the
- * relative residual of the sine fits, smaller is better) travel with the values.
+ * e^{j w t} time dependence. Optional per-line coherence (0..1), a per-line quality figure (the
+ * relative residual of the sine fits, smaller is better) and the per-line variance of the
+ * estimate travel with the values; {@code withXxx} methods return a new FRF with one added.
  */
 public final class Frf {
     private final double[] frequencyHz;
@@ -19,15 +20,17 @@ public final class Frf {
     private final double[] imag;
     private final double[] coherence;
     private final double[] quality;
+    private final double[] variance;
     private final FrfQuantity quantity;
 
     private Frf(double[] frequencyHz, double[] real, double[] imag, double[] coherence, double[] quality,
-                FrfQuantity quantity) {
+                double[] variance, FrfQuantity quantity) {
         this.frequencyHz = frequencyHz;
         this.real = real;
         this.imag = imag;
         this.coherence = coherence;
         this.quality = quality;
+        this.variance = variance;
         this.quantity = quantity;
     }
 
@@ -42,34 +45,15 @@ public final class Frf {
      * @throws AnalysisException if lengths differ, a value is not finite, or frequencies do not increase
      */
     public static Frf of(double[] frequencyHz, double[] real, double[] imag, FrfQuantity quantity) {
-        return of(frequencyHz, real, imag, null, null, quantity);
-    }
-
-    /**
-     * Builds an FRF with optional per-line figures, copying the arrays.
-     *
-     * @param frequencyHz strictly increasing positive frequency lines, Hz
-     * @param real real parts
-     * @param imag imaginary parts
-     * @param coherence per-line coherence 0..1, or null
-     * @param quality per-line relative fit residual (0 = perfect), or null
-     * @param quantity what the FRF relates
-     * @return the FRF
-     */
-    public static Frf of(double[] frequencyHz, double[] real, double[] imag, double[] coherence, double[] quality,
-                         FrfQuantity quantity) {
         if (quantity == null) {
             throw new AnalysisException("FRF quantity is missing: expected receptance, mobility or accelerance");
+        }
+        if (frequencyHz == null) {
+            throw new AnalysisException("FRF frequency lines are missing");
         }
         int n = frequencyHz.length;
         checkLength("real", real, n);
         checkLength("imag", imag, n);
-        if (coherence != null) {
-            checkLength("coherence", coherence, n);
-        }
-        if (quality != null) {
-            checkLength("quality", quality, n);
-        }
         if (n == 0) {
             throw new AnalysisException("an FRF needs at least one frequency line, got none");
         }
@@ -85,15 +69,57 @@ public final class Frf {
                 throw new AnalysisException("FRF value at line " + i + " (" + frequencyHz[i] + " Hz) is not finite: "
                         + real[i] + " + j" + imag[i]);
             }
-            if (coherence != null && !(coherence[i] >= 0 && coherence[i] <= 1)) {
-                throw new AnalysisException("coherence at line " + i + " must lie in 0..1, got " + coherence[i]);
-            }
-            if (quality != null && (!(quality[i] >= 0) || Double.isInfinite(quality[i]))) {
-                throw new AnalysisException("quality at line " + i + " must be zero or positive and finite, got " + quality[i]);
+        }
+        return new Frf(frequencyHz.clone(), real.clone(), imag.clone(), null, null, null, quantity);
+    }
+
+    /**
+     * The same FRF with per-line coherence.
+     *
+     * @param coherence one value in 0..1 per line (copied)
+     * @return a new FRF
+     */
+    public Frf withCoherence(double[] coherence) {
+        checkLength("coherence", coherence, size());
+        for (int i = 0; i < coherence.length; i++) {
+            if (!(coherence[i] >= 0 && coherence[i] <= 1)) {
+                throw new AnalysisException("coherence at line " + i + " (" + frequencyHz[i] + " Hz) must lie in 0..1, got "
+                        + coherence[i]);
             }
         }
-        return new Frf(frequencyHz.clone(), real.clone(), imag.clone(),
-                coherence == null ? null : coherence.clone(), quality == null ? null : quality.clone(), quantity);
+        return new Frf(frequencyHz, real, imag, coherence.clone(), quality, variance, quantity);
+    }
+
+    /**
+     * The same FRF with a per-line quality figure.
+     *
+     * @param quality one relative fit residual per line, zero or more (0 = perfect) (copied)
+     * @return a new FRF
+     */
+    public Frf withQuality(double[] quality) {
+        checkNonNegative("quality", quality);
+        return new Frf(frequencyHz, real, imag, coherence, quality.clone(), variance, quantity);
+    }
+
+    /**
+     * The same FRF with the per-line variance of the estimate.
+     *
+     * @param variance one value per line: E|H_est - H|^2, in the quantity's SI units squared (copied)
+     * @return a new FRF
+     */
+    public Frf withVariance(double[] variance) {
+        checkNonNegative("variance", variance);
+        return new Frf(frequencyHz, real, imag, coherence, quality, variance.clone(), quantity);
+    }
+
+    private void checkNonNegative(String name, double[] values) {
+        checkLength(name, values, size());
+        for (int i = 0; i < values.length; i++) {
+            if (!(values[i] >= 0) || Double.isInfinite(values[i])) {
+                throw new AnalysisException(name + " at line " + i + " (" + frequencyHz[i]
+                        + " Hz) must be zero or positive and finite, got " + values[i]);
+            }
+        }
     }
 
     private static void checkLength(String name, double[] values, int expected) {
@@ -153,8 +179,13 @@ public final class Frf {
         return Optional.ofNullable(quality).map(double[]::clone);
     }
 
+    /** @return a copy of the per-line variance E|H_est - H|^2, if present */
+    public Optional<double[]> variance() {
+        return Optional.ofNullable(variance).map(double[]::clone);
+    }
+
     /**
-     * Converts to another quantity: each time derivative multiplies by j w.
+     * Converts to another quantity: each time derivative multiplies by j w (variances by w^2).
      *
      * @param target the quantity wanted
      * @return this FRF expressed as the target quantity (this instance when it already is)
@@ -167,14 +198,19 @@ public final class Frf {
         int n = size();
         double[] re = new double[n];
         double[] im = new double[n];
+        double[] var = variance == null ? null : new double[n];
         for (int i = 0; i < n; i++) {
             Complex jw = new Complex(0, 2.0 * Math.PI * frequencyHz[i]);
             Complex factor = order >= 0 ? jw.pow(order) : jw.pow(-order).reciprocal();
             Complex v = value(i).multiply(factor);
             re[i] = v.getReal();
             im[i] = v.getImaginary();
+            if (var != null) {
+                double gain = factor.norm();
+                var[i] = variance[i] * gain * gain;
+            }
         }
-        return new Frf(frequencyHz, re, im, coherence, quality, target);
+        return new Frf(frequencyHz, re, im, coherence, quality, var, target);
     }
 
     @Override
@@ -190,7 +226,7 @@ public final class Frf {
         Frf that = (Frf) other;
         return quantity == that.quantity && Arrays.equals(frequencyHz, that.frequencyHz) && Arrays.equals(real, that.real)
                 && Arrays.equals(imag, that.imag) && Arrays.equals(coherence, that.coherence)
-                && Arrays.equals(quality, that.quality);
+                && Arrays.equals(quality, that.quality) && Arrays.equals(variance, that.variance);
     }
 
     @Override

@@ -40,7 +40,7 @@ class FrfCsvWriterTest {
             coh[i] = random.nextDouble();
             q[i] = random.nextDouble() * 1e-3;
         }
-        Frf frf = Frf.of(f, re, im, coh, q, FrfQuantity.MOBILITY);
+        Frf frf = Frf.of(f, re, im, FrfQuantity.MOBILITY).withCoherence(coh).withQuality(q);
         Map<String, String> metadata = new LinkedHashMap<>();
         metadata.put("specimen", "wire 17");
         metadata.put("sensor", "x = 0.25 m");

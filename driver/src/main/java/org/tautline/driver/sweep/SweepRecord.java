@@ -40,6 +40,6 @@ public record SweepRecord(SteppedSinePlan plan, String responseQuantity, List<Sw
             im[i] = p.response().getImaginary();
             quality[i] = p.relativeResidual();
         }
-        return Frf.of(f, re, im, null, quality, FrfQuantity.forResponse(responseQuantity));
+        return Frf.of(f, re, im, FrfQuantity.forResponse(responseQuantity)).withQuality(quality);
     }
 }
