@@ -130,8 +130,10 @@ public final class SteppedSineRunner {
     }
 
     private static SweepPoint fitStep(SampleBlock block, double f, SteppedSinePlan plan, double fs, double rigTimeS) {
-        SinePhasor force = SineFit.fit(block.samples()[0], fs, f, plan.harmonicOrder());
-        SinePhasor response = SineFit.fit(block.samples()[1], fs, f, plan.harmonicOrder());
+        SinePhasor[] fitted = SineFit.fitChannels(new double[][] {block.samples()[0], block.samples()[1]}, fs, f,
+                plan.harmonicOrder());
+        SinePhasor force = fitted[0];
+        SinePhasor response = fitted[1];
         if (!(force.amplitude() > 0)) {
             throw new RigException("no force measured at " + f + " Hz: check the force sensor on channel 0 and the stinger");
         }
