@@ -18,9 +18,13 @@ public final class DemoScenario {
     private DemoScenario() {
     }
 
-    /** @return the simulated rig's configuration: the wire as it really is in the simulation */
+    /** The tension the demo wire really has in the simulation, N: a little below its nominal 150 N. */
+    public static final double TRUE_TENSION_N = 146.5;
+
+    /** @return the simulated rig's configuration: the wire as it really is, slacker than stated */
     public static SimulationConfig simulation() {
-        return SimulationConfigs.demoWire();
+        SimulationConfig demo = SimulationConfigs.demoWire();
+        return demo.withSpecimen(demo.specimen().withTensionN(TRUE_TENSION_N));
     }
 
     /** @return what the technician states about the specimen (nominal values) */

@@ -92,5 +92,7 @@ class DemoQualificationTest {
         assertEquals(stated.linearDensityKgPerM(), truth.linearDensityKgPerM(), 0.0);
         assertEquals(stated.forcingPositionM(), outcome.truth().config().sensors().forcingPositionM(), 0.0);
         assertEquals(stated.sensorPositionM(), outcome.truth().config().sensors().sensorPositionM(), 0.0);
+        assertEquals(150.0, stated.nominalTensionN(), 0.0);
+        assertEquals(DemoScenario.TRUE_TENSION_N, truth.tensionN(), 0.0, "the demo wire is slacker than stated");
     }
 }
