@@ -124,8 +124,9 @@ class SensorImperfectionsTest {
         // Method. The force channel carries the force transmitted into the wire, not the coil force, so the
         // coil's harmonics reach it through the linear shaker-plus-wire dynamics at 2f and 3f. In the model
         // the nonlinear part of the coil force, Bl (a2 i^2 + a3 i^3), enters exactly where the linear part
-        // Bl V/R does, so it reaches the force sensor through the same transfer G(f) = F/V scaled by R/Bl.
-        // With i = I cos wt, a2 = 2 HD2/i_ref and a3 = 4 HD3/i_ref^2 (the documented scaling), the coil force
+        // Bl V/R does (RigDynamics.advanceBodies), so it reaches the force sensor through the same transfer
+        // G(f) = F/V scaled by R/Bl. With i = I cos wt, a2 = 2 HD2/i_ref and a3 = 4 HD3/i_ref^2 (what the
+        // documented relative harmonics HDk at i_ref imply for g(i) = i + a2 i^2 + a3 i^3), the coil force
         // has Bl (a2 I^2/2) at 2f and Bl (a3 I^3/4) at 3f, so the transmitted harmonic k is
         // |G(k f)| V HDk s^(k-1) with s = I/i_ref = V/maxDriveV, and the fundamental is |G(f)| V (1 + 3 HD3 s^2)
         // (the cubic's own share, 3/4 a3 I^3). G is measured separately at f, 2f and 3f with pure drives on
