@@ -8,7 +8,8 @@ import org.tautline.driver.RigException;
  * <p>Both channels get white Gaussian noise of the given one-sided density (per-sample standard
  * deviation density sqrt(fs/2)), then an ADC of {@code adcBits} bits that clips at plus or minus
  * full scale and rounds to its step 2 fullScale / 2^bits. The response channel also picks up mains
- * hum: harmonic k = 1..mainsHarmonicCount at k mainsHz with amplitude mainsAmplitude / k. Positions
+ * hum: harmonic k = 1..mainsHarmonicCount at k mainsHz with amplitude mainsAmplitude / k (harmonics
+ * at or above half the sample rate are left out, as an anti-alias filter would remove them). Positions
  * are checked against the specimen length by {@link SimulationConfig}.
  *
  * @param forcingPositionM stinger position x_f along the span, m

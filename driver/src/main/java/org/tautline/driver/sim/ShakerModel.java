@@ -8,8 +8,9 @@ package org.tautline.driver.sim;
  * memory): armature mass on a suspension spring and damper; coil current
  * i = (V - Bl v)/R with the back-EMF Bl v (coil inductance neglected); coil force Bl g(i). The static
  * nonlinearity g(i) = i + a2 i^2 + a3 i^3 is scaled so that a sine of the reference current
- * i_ref = maxDriveV / R has relative second and third harmonics {@code secondHarmonicDistortion} and
- * {@code thirdHarmonicDistortion}; at lower currents they fall like a real weak nonlinearity
+ * i_ref = maxDriveV / R has second and third harmonics of {@code secondHarmonicDistortion} and
+ * {@code thirdHarmonicDistortion} relative to the linear part Bl i (the coil force's fundamental is
+ * larger by the cubic term's share, 3/4 a3 i^2); at lower currents they fall like a real weak nonlinearity
  * (second harmonic proportional to i, third to i^2).
  *
  * @param movingMassKg armature (and force-sensor) moving mass, kg

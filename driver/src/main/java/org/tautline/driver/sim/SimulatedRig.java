@@ -142,7 +142,13 @@ public final class SimulatedRig implements Rig {
         }
     }
 
-    /** Simulates sampleCount samples from amplitude a0 ramping linearly to a1; fills out when given. */
+    /**
+     * Simulates sampleCount samples from amplitude a0 ramping linearly to a1; fills out when given.
+     *
+     * <p>The source's phase keeps advancing while the output is off, as a generator's oscillator
+     * does, so switching back on resumes a phase locked to the rig clock. Ramps draw no sensor noise
+     * (their samples are not delivered).
+     */
     private void simulate(int sampleCount, double a0, double a1, double[][] out) {
         double phaseStep = 2.0 * Math.PI * frequencyHz / (sampleRateHz * substeps);
         for (int k = 0; k < sampleCount; k++) {
