@@ -98,11 +98,28 @@ final class CsvCells {
             if (Double.isFinite(value)) {
                 return value;
             }
-        } else if (!isNanOrInfinity(cell)) {
-            throw new AnalysisException(lines.at() + "column '" + column + "' holds " + quoted(cell) + ", expected a number");
         }
-        throw new AnalysisException(lines.at() + "column '" + column + "' holds " + quoted(cell)
-                + ", expected a finite number (not NaN or infinity)");
+        throw new AnalysisException(lines.at() + "column '" + column + "' holds " + quoted(cell) + ", " + expectation(cell));
+    }
+
+    /**
+     * What a cell that is not a finite decimal number should have been.
+     *
+     * @param cell the trimmed cell, not a finite decimal
+     * @return {@code expected a number}, or {@code expected a finite number (not NaN or infinity)}
+     */
+    static String expectation(String cell) {
+        return isNanOrInfinity(cell) || isDecimal(cell) ? "expected a finite number (not NaN or infinity)"
+                : "expected a number";
+    }
+
+    /** @return the cell as a double if it is a finite decimal, NaN otherwise */
+    static double finiteOrNaN(String cell) {
+        if (!isDecimal(cell)) {
+            return Double.NaN;
+        }
+        double value = Double.parseDouble(cell);
+        return Double.isFinite(value) ? value : Double.NaN;
     }
 
     /** @return the text in single quotes, cut to a readable length, with control characters shown as \\uXXXX */
