@@ -99,7 +99,8 @@ final class CsvCells {
                 return value;
             }
         }
-        throw new AnalysisException(lines.at() + "column '" + column + "' holds " + quoted(cell) + ", " + expectation(cell));
+        throw new AnalysisException(lines.at() + "column " + quoted(column) + " holds " + quoted(cell) + ", "
+                + expectation(cell));
     }
 
     /**
@@ -122,13 +123,19 @@ final class CsvCells {
         return Double.isFinite(value) ? value : Double.NaN;
     }
 
-    /** @return the text in single quotes, cut to a readable length, with control characters shown as \\uXXXX */
+    /**
+     * Quotes text for a message.
+     *
+     * @param text the text
+     * @return the text in single quotes, cut to a readable length, with control and line-separator
+     *         characters shown as \\uXXXX
+     */
     static String quoted(String text) {
         StringBuilder out = new StringBuilder(Math.min(text.length(), MAX_QUOTED_CHARS) + 8).append('\'');
         int shown = Math.min(text.length(), MAX_QUOTED_CHARS);
         for (int i = 0; i < shown; i++) {
             char c = text.charAt(i);
-            if (c < ' ' || c == 0x7f) {
+            if (isControl(c)) {
                 out.append(String.format(Locale.ROOT, "\\u%04x", (int) c));
             } else {
                 out.append(c);
@@ -138,6 +145,20 @@ final class CsvCells {
             out.append("...");
         }
         return out.append('\'').toString();
+    }
+
+    /** @return true when the text holds a control or line-separator character */
+    static boolean hasControl(String text) {
+        for (int i = 0; i < text.length(); i++) {
+            if (isControl(text.charAt(i))) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private static boolean isControl(char c) {
+        return Character.isISOControl(c) || c == '\u2028' || c == '\u2029';
     }
 
     private static boolean isNanOrInfinity(String cell) {

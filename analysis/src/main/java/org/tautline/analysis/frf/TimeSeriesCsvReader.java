@@ -143,6 +143,8 @@ public final class TimeSeriesCsvReader implements SampleSource {
                 problem = "is empty";
             } else if (name.indexOf('"') >= 0) {
                 problem = "holds a double quote";
+            } else if (CsvCells.hasControl(name)) {
+                problem = "holds a control character";
             } else if (CsvCells.isDecimal(name)) {
                 problem = "is a number (is the header missing?)";
             } else if (name.equals(TIME)) {
