@@ -21,7 +21,8 @@ import org.tautline.analysis.signal.SampleSource;
  * <p>Layout: optional metadata lines {@code # key: value}, then either a header
  * {@code time_s,<channel>,...} with a time column (the sample rate is the reciprocal of the first
  * time step, and every later step must equal the first within a relative 1e-6), or a
- * {@code # sample_rate_hz: 20000} line and a header of channel names only. Then one line per frame.
+ * {@code # sample_rate_hz: 20000} line and a header of channel names only (not both). Then one line
+ * per frame; a file with a time column needs at least two.
  * Lines, blank lines, the byte-order mark and cells follow the rules of {@link FrfCsvReader}.
  *
  * <p>Errors: a malformed line is reported as an {@link AnalysisException} naming the file and the
@@ -108,6 +109,8 @@ public final class TimeSeriesCsvReader implements SampleSource {
     /**
      * Opens time-series CSV text from a byte stream decoded as UTF-8; {@link #close} closes the stream.
      *
+     * <p>When opening fails the stream is left open for the caller to close.
+     *
      * @param in the bytes
      * @param displayName how messages name the source, for example {@code rec.csv}
      * @return the reader
@@ -120,6 +123,8 @@ public final class TimeSeriesCsvReader implements SampleSource {
 
     /**
      * Opens time-series CSV text from characters; {@link #close} closes the reader.
+     *
+     * <p>When opening fails the reader is left open for the caller to close.
      *
      * @param in the text
      * @param displayName how messages name the source, for example {@code rec.csv}
@@ -195,7 +200,7 @@ public final class TimeSeriesCsvReader implements SampleSource {
         }
     }
 
-    /** @return the {@code # key: value} lines of the file in file order (unmodifiable) */
+    /** @return the {@code # key: value} lines in file order, {@code sample_rate_hz} included (unmodifiable) */
     public Map<String, String> metadata() {
         return metadata;
     }
@@ -266,7 +271,12 @@ public final class TimeSeriesCsvReader implements SampleSource {
         lastTimeS = row[0];
     }
 
-    /** @return the last line read from the text, for example {@code rec.csv, line 12} (up to two lines ahead of the frames delivered) */
+    /**
+     * Where the reader is in the text.
+     *
+     * @return the last line read, for example {@code rec.csv, line 12} (at the start this runs up to
+     *         two lines ahead of the frames delivered)
+     */
     @Override
     public String position() {
         return lines.name() + ", line " + lines.lineNumber();

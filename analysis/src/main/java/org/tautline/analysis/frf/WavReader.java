@@ -77,6 +77,8 @@ public final class WavReader implements SampleSource {
     /**
      * Opens WAV bytes from a stream at byte 0; {@link #close} closes the stream.
      *
+     * <p>When opening fails the stream is left open for the caller to close.
+     *
      * @param in the bytes
      * @param displayName how messages name the source, for example {@code rec.wav}
      * @return the reader
