@@ -17,8 +17,8 @@ import org.tautline.analysis.AnalysisException;
  *
  * <p>Layout: metadata lines starting with {@code #} ({@code # quantity: receptance},
  * {@code # units: m/N}, then the caller's key/value pairs in the map's iteration order), a header
- * {@code frequency_hz,real,imag} followed by {@code coherence} and {@code quality} when the FRF
- * carries them, then one line per frequency line. Numbers are written by {@link Double#toString(double)}
+ * {@code frequency_hz,real,imag} followed by {@code coherence}, {@code quality} and {@code variance}
+ * (in that order) when the FRF carries them, then one line per frequency line. Numbers are written by {@link Double#toString(double)}
  * (the shortest decimal that reads back to the same double), lines end with {@code \n}, text is
  * UTF-8. The file is written to a temporary file in the same directory and then moved over the
  * target, so a reader never sees half a file.
@@ -86,12 +86,16 @@ public final class FrfCsvWriter {
         }
         double[] coherence = frf.coherence().orElse(null);
         double[] quality = frf.quality().orElse(null);
+        double[] variance = frf.variance().orElse(null);
         out.append("frequency_hz,real,imag");
         if (coherence != null) {
             out.append(",coherence");
         }
         if (quality != null) {
             out.append(",quality");
+        }
+        if (variance != null) {
+            out.append(",variance");
         }
         out.append('\n');
         double[] frequency = frf.frequenciesHz();
@@ -105,6 +109,9 @@ public final class FrfCsvWriter {
             }
             if (quality != null) {
                 out.append(',').append(Double.toString(quality[i]));
+            }
+            if (variance != null) {
+                out.append(',').append(Double.toString(variance[i]));
             }
             out.append('\n');
         }

@@ -85,6 +85,17 @@ class FrfCsvWriterTest {
     }
 
     @Test
+    void writesVarianceAfterQualityAndOnlyTheColumnsPresent() {
+        Frf frf = Frf.of(new double[] {10, 20}, new double[] {1e-6, -2.5e-7}, new double[] {0, 3}, FrfQuantity.ACCELERANCE)
+                .withVariance(new double[] {4e-14, 0.0});
+        assertEquals("# quantity: accelerance\n# units: m/(N s^2)\nfrequency_hz,real,imag,variance\n"
+                + "10.0,1.0E-6,0.0,4.0E-14\n20.0,-2.5E-7,3.0,0.0\n", FrfCsvWriter.format(frf, Map.of()));
+        Frf all = frf.withQuality(new double[] {0.5, 0.25}).withCoherence(new double[] {1.0, 0.75});
+        assertEquals("# quantity: accelerance\n# units: m/(N s^2)\nfrequency_hz,real,imag,coherence,quality,variance\n"
+                + "10.0,1.0E-6,0.0,1.0,0.5,4.0E-14\n20.0,-2.5E-7,3.0,0.75,0.25,0.0\n", FrfCsvWriter.format(all, Map.of()));
+    }
+
+    @Test
     void rejectsMetadataThatWouldBreakTheLayout() {
         Frf frf = Frf.of(new double[] {10}, new double[] {1}, new double[] {0}, FrfQuantity.RECEPTANCE);
         assertEquals("FRF CSV metadata key 'units' is reserved: the writer sets it from the FRF itself",
