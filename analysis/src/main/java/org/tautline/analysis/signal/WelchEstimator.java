@@ -147,8 +147,8 @@ public final class WelchEstimator {
             }
         }
         if (sums.segments() == 0) {
-            throw new AnalysisException("recording too short for one Welch segment: " + source.position() + " gave " + consumed
-                    + " frames, segmentLength needs " + n + "; use a shorter segment or a longer recording");
+            throw new AnalysisException("recording too short for one Welch segment: it ended after " + consumed + " frames (at "
+                    + source.position() + "), segmentLength needs " + n + "; use a shorter segment or a longer recording");
         }
         listener.progress(consumed, total);
         long used = n + (long) (sums.segments() - 1) * hop;
