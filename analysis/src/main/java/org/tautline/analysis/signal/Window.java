@@ -131,10 +131,10 @@ public final class Window {
     /**
      * The level of the highest sidelobe relative to the main-lobe peak, found by searching the DTFT.
      *
-     * <p>The DTFT is sampled on a grid of 1/16 bin or finer (a zero-padded FFT, up to 2^22 points),
-     * the main lobe is taken to end at the first local minimum of |W| below half the peak, and the
+     * <p>The DTFT is sampled every 1/16 bin by a zero-padded FFT (every 1/4 to 1/16 bin above N = 2^18, so the
+     * padded transform has at most max(2^22, 4 N) points), the main lobe is taken to end at the first local minimum of |W| below half the peak, and the
      * three largest local maxima beyond it are refined by golden-section search on the exact DTFT.
-     * The search covers 0 to fs/2. Cost O(16 N log N).
+     * The search covers 0 to fs/2.
      *
      * @return the highest sidelobe, dB (negative), or negative infinity when |W| has no sidelobe
      */
