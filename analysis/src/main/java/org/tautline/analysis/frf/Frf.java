@@ -139,17 +139,26 @@ public final class Frf {
         return quantity;
     }
 
-    /** @param line 0-based line index @return the frequency of that line, Hz */
+    /**
+     * @param line 0-based line index
+     * @return the frequency of that line, Hz
+     */
     public double frequencyHz(int line) {
         return frequencyHz[line];
     }
 
-    /** @param line 0-based line index @return the complex value of that line */
+    /**
+     * @param line 0-based line index
+     * @return the complex value of that line
+     */
     public Complex value(int line) {
         return new Complex(real[line], imag[line]);
     }
 
-    /** @param line 0-based line index @return |H| at that line */
+    /**
+     * @param line 0-based line index
+     * @return |H| at that line
+     */
     public double magnitude(int line) {
         return Math.hypot(real[line], imag[line]);
     }

@@ -34,7 +34,7 @@ public interface SampleSource extends Closeable {
      *
      * @param buffer buffer[channel][i], at least {@link #channelCount()} rows of at least {@code maxFrames}
      * @param maxFrames most frames to read, 1 or more
-     * @return frames read into buffer[c][0..n), or -1 at the end of the stream
+     * @return frames read into buffer[c][0..n), at least 1, or -1 at the end of the stream (never 0)
      * @throws IOException when the underlying file cannot be read
      */
     int read(double[][] buffer, int maxFrames) throws IOException;

@@ -1,10 +1,13 @@
 package org.tautline.app.cli;
 
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.tautline.app.qualify.DemoScenario;
+import org.tautline.app.bench.FrfBenchmark;
 import org.tautline.driver.sim.SimulatorBenchmark;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -14,7 +17,7 @@ import picocli.CommandLine.Model.CommandSpec;
 /** {@code tautline bench}: benchmarks that print figures; none of them passes or fails on time. */
 @Command(name = "bench", mixinStandardHelpOptions = true,
         description = "Run a benchmark and print its figures.",
-        subcommands = {BenchCommand.Simulator.class})
+        subcommands = {BenchCommand.Simulator.class, BenchCommand.FrfFromWav.class})
 final class BenchCommand implements Runnable {
     @Spec
     private CommandSpec spec;
@@ -58,6 +61,84 @@ final class BenchCommand implements Runnable {
                         result.realTimeMultiple());
             }
             return 0;
+        }
+    }
+
+    /** {@code tautline bench frf}: H1 and coherence from a two-channel WAV file, and the heap it takes. */
+    @Command(name = "frf", mixinStandardHelpOptions = true,
+            description = "Time H1 + coherence (Hann, 50 %% overlap) on a two-channel float WAV of 2^24 samples per"
+                    + " channel, and on one a quarter as long after a warm-up run, and print throughput and heap use: the heap should not"
+                    + " grow with the record. Compare with app/src/bench/frf_reference.py (scipy) on the same file.")
+    static final class FrfFromWav implements Callable<Integer> {
+        @Spec
+        private CommandSpec spec;
+
+        @Option(names = "--frames", paramLabel = "N", defaultValue = "16777216",
+                description = "Samples per channel (default: ${DEFAULT-VALUE} = 2^24).")
+        private long frames;
+
+        @Option(names = "--segment", paramLabel = "N", defaultValue = "4096",
+                description = "Welch segment length (default: ${DEFAULT-VALUE}).")
+        private int segment;
+
+        @Option(names = "--keep", paramLabel = "FILE.wav",
+                description = "Keep the full-length recording here (for the scipy reference) instead of deleting it.")
+        private Path keep;
+
+        @Option(names = "--json", description = "Print the figures as JSON.")
+        private boolean json;
+
+        @Override
+        public Integer call() throws Exception {
+            Path dir = Files.createTempDirectory("tautline-bench-frf");
+            Path full = keep != null ? keep : dir.resolve("full.wav");
+            Path quarter = dir.resolve("quarter.wav");
+            try {
+                FrfBenchmark.run(quarter, frames / 4, segment); // warm-up: let the JIT compile the hot loops
+                FrfBenchmark.Figures small = FrfBenchmark.run(quarter, frames / 4, segment);
+                FrfBenchmark.Figures large = FrfBenchmark.run(full, frames, segment);
+                if (json) {
+                    ObjectNode node = ResultJson.MAPPER.createObjectNode();
+                    node.put("benchmark", "frf");
+                    node.set("quarterLength", figures(small));
+                    node.set("fullLength", figures(large));
+                    spec.commandLine().getOut().println(ResultJson.MAPPER.writeValueAsString(node));
+                } else {
+                    spec.commandLine().getOut().print(text(small) + text(large));
+                    spec.commandLine().getOut().flush();
+                }
+            } finally {
+                Files.deleteIfExists(quarter);
+                if (keep == null) {
+                    Files.deleteIfExists(full);
+                }
+                Files.deleteIfExists(dir);
+            }
+            return 0;
+        }
+
+        private static ObjectNode figures(FrfBenchmark.Figures f) {
+            ObjectNode node = ResultJson.MAPPER.createObjectNode();
+            node.put("framesPerChannel", f.frames());
+            node.put("segment", f.segmentLength());
+            node.put("fileBytes", f.fileBytes());
+            node.put("wallTimeS", f.wallS());
+            node.put("samplesPerS", f.samplesPerS());
+            node.put("fileBytesPerS", f.bytesPerS());
+            node.put("peakHeapBytes", f.peakHeapBytes());
+            node.put("retainedHeapBytes", f.retainedHeapBytes());
+            node.put("averages", f.averages());
+            node.put("meanCoherence", f.meanCoherence());
+            return node;
+        }
+
+        private static String text(FrfBenchmark.Figures f) {
+            return String.format(Locale.ROOT,
+                    "frf: 2 x %d samples (%.0f MiB WAV), segment %d: %.2f s = %.1f M samples/s, %.0f MiB/s;"
+                            + " peak heap %.1f MiB, retained %.1f MiB; %d averages, mean coherence %.3f%n",
+                    f.frames(), f.fileBytes() / 1048576.0, f.segmentLength(), f.wallS(), f.samplesPerS() / 1e6,
+                    f.bytesPerS() / 1048576.0, f.peakHeapBytes() / 1048576.0, f.retainedHeapBytes() / 1048576.0,
+                    f.averages(), f.meanCoherence());
         }
     }
 }

@@ -41,7 +41,8 @@ final class DemoCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         System.err.print(SafetyNotice.asText(true));
         System.err.flush();
-        SweepListener progress = noProgress ? SweepListener.NONE : new ProgressBar(System.err, System.console() != null);
+        SweepListener progress = noProgress ? SweepListener.NONE
+                : new ProgressBar(System.err, System.console() != null).sweep();
         DemoOutcome outcome = DemoRun.run(progress, () -> Thread.currentThread().isInterrupted());
         if (json) {
             out.println(ResultJson.MAPPER.writeValueAsString(ResultJson.outcome(outcome)));

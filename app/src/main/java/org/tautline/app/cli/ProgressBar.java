@@ -3,21 +3,24 @@ package org.tautline.app.cli;
 import java.io.PrintStream;
 import java.util.Locale;
 
+import org.tautline.analysis.ProgressListener;
 import org.tautline.driver.sweep.SweepListener;
 import org.tautline.driver.sweep.SweepProgress;
 
 /**
- * A one-line text progress bar with ETA for sweeps, written to a stream (normally standard error).
+ * A one-line text progress bar with ETA, written to a stream (normally standard error).
  *
  * <p>On a terminal the line is redrawn in place at most ten times a second; when the stream is not
- * a terminal a plain line is printed at every tenth of the way so logs stay short.
+ * a terminal a plain line is printed at every tenth of the way so logs stay short. It follows a
+ * sweep ({@link #sweep()}) or a long file job ({@link #frames(String)}).
  */
-final class ProgressBar implements SweepListener {
+final class ProgressBar {
     private static final int WIDTH = 30;
     private static final long REDRAW_INTERVAL_NS = 100_000_000L;
 
     private final PrintStream out;
     private final boolean interactive;
+    private final long startNs = System.nanoTime();
     private long lastDrawNs;
     private int lastTenth = -1;
 
@@ -26,33 +29,58 @@ final class ProgressBar implements SweepListener {
         this.interactive = interactive;
     }
 
-    @Override
-    public void onStep(SweepProgress progress) {
-        boolean last = progress.completedSteps() == progress.totalSteps();
+    /** @return a sweep listener drawing step, frequency, rig time and the sweep's own ETA */
+    SweepListener sweep() {
+        return p -> draw(p.fraction(), p.completedSteps() == p.totalSteps(), line(p));
+    }
+
+    /**
+     * A listener for work counted in frames; the ETA comes from the rate so far.
+     *
+     * @param what what is being read, for the line (a file name)
+     * @return the listener
+     */
+    ProgressListener frames(String what) {
+        return (done, total) -> {
+            double fraction = total > 0 ? Math.min(1.0, (double) done / total) : 0.0;
+            double elapsedS = (System.nanoTime() - startNs) * 1e-9;
+            double etaS = fraction > 0 ? elapsedS * (1 - fraction) / fraction : Double.NaN;
+            String amount = total > 0 ? String.format(Locale.ROOT, "%.2f of %.2f M frames", done / 1e6, total / 1e6)
+                    : String.format(Locale.ROOT, "%.2f M frames", done / 1e6);
+            draw(fraction, total > 0 && done >= total, bar(fraction) + "  " + what + "  " + amount + "  " + eta(etaS));
+        };
+    }
+
+    private void draw(double fraction, boolean last, String line) {
         if (interactive) {
             long now = System.nanoTime();
             if (!last && now - lastDrawNs < REDRAW_INTERVAL_NS) {
                 return;
             }
             lastDrawNs = now;
-            out.print("\r" + line(progress) + (last ? "\n" : ""));
+            out.print("\r" + line + (last ? "\n" : ""));
         } else {
-            int tenth = (int) Math.floor(progress.fraction() * 10);
+            int tenth = (int) Math.floor(fraction * 10);
             if (tenth == lastTenth && !last) {
                 return;
             }
             lastTenth = tenth;
-            out.println(line(progress));
+            out.println(line);
         }
         out.flush();
     }
 
     static String line(SweepProgress p) {
-        int filled = (int) Math.round(p.fraction() * WIDTH);
-        String bar = "#".repeat(filled) + ".".repeat(WIDTH - filled);
-        String eta = Double.isFinite(p.remainingWallTimeS())
-                ? String.format(Locale.ROOT, "ETA %4.0f s", p.remainingWallTimeS()) : "ETA    ? s";
-        return String.format(Locale.ROOT, "[%s] %3.0f%%  step %d/%d  %8.2f Hz  rig %6.1f s  %s", bar,
-                100 * p.fraction(), p.completedSteps(), p.totalSteps(), p.frequencyHz(), p.rigTimeS(), eta);
+        return String.format(Locale.ROOT, "%s  step %d/%d  %8.2f Hz  rig %6.1f s  %s", bar(p.fraction()),
+                p.completedSteps(), p.totalSteps(), p.frequencyHz(), p.rigTimeS(), eta(p.remainingWallTimeS()));
+    }
+
+    private static String bar(double fraction) {
+        int filled = (int) Math.round(fraction * WIDTH);
+        return String.format(Locale.ROOT, "[%s] %3.0f%%", "#".repeat(filled) + ".".repeat(WIDTH - filled), 100 * fraction);
+    }
+
+    private static String eta(double seconds) {
+        return Double.isFinite(seconds) ? String.format(Locale.ROOT, "ETA %4.0f s", seconds) : "ETA    ? s";
     }
 }

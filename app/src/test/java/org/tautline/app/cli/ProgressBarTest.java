@@ -7,6 +7,7 @@ import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
 
 import org.junit.jupiter.api.Test;
+import org.tautline.driver.sweep.SweepListener;
 import org.tautline.driver.sweep.SweepProgress;
 
 class ProgressBarTest {
@@ -28,7 +29,7 @@ class ProgressBarTest {
     @Test
     void printsOneLinePerTenthWhenNotOnATerminal() {
         ByteArrayOutputStream bytes = new ByteArrayOutputStream();
-        ProgressBar bar = new ProgressBar(new PrintStream(bytes, true, StandardCharsets.UTF_8), false);
+        SweepListener bar = new ProgressBar(new PrintStream(bytes, true, StandardCharsets.UTF_8), false).sweep();
         for (int i = 1; i <= 100; i++) {
             bar.onStep(new SweepProgress(i, 100, 100 + i, i, 100 - i, 1, null));
         }

@@ -1,0 +1,115 @@
+package org.tautline.app.cli;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+import com.fasterxml.jackson.core.JsonLocation;
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.JsonNode;
+import org.tautline.analysis.AnalysisException;
+import org.tautline.analysis.frf.ChannelCalibration;
+import org.tautline.analysis.frf.ChannelCalibration.Quantity;
+
+/**
+ * Channel calibrations from the command line ({@code CH=SENSITIVITY,UNIT}) or a small JSON file.
+ *
+ * <p>The JSON file (our own format) holds {@code {"channels": [{"channel": "force", "quantity":
+ * "force", "sensitivityVoltsPerUnit": 0.0225, "unit": "N"}, ...]}}; {@code unit} may be left out,
+ * it is then the quantity's SI unit.
+ */
+final class Calibrations {
+    private Calibrations() {
+    }
+
+    /**
+     * Parses one command-line calibration.
+     *
+     * @param text {@code CH=SENSITIVITY,UNIT}, for example {@code force=0.0225,N} or {@code 1=0.0102,m/s^2}
+     * @return the calibration; the quantity follows from the SI unit
+     */
+    static ChannelCalibration parseOption(String text) {
+        int equals = text.indexOf('=');
+        int comma = text.lastIndexOf(',');
+        if (equals <= 0 || comma < equals) {
+            throw new AnalysisException("--sensitivity '" + text + "': expected CHANNEL=VOLTS_PER_UNIT,UNIT, for example"
+                    + " force=0.0225,N or 1=0.0102,m/s^2");
+        }
+        String channel = text.substring(0, equals).strip();
+        String number = text.substring(equals + 1, comma).strip();
+        String unit = text.substring(comma + 1).strip();
+        double sensitivity;
+        try {
+            sensitivity = Double.parseDouble(number);
+        } catch (NumberFormatException e) {
+            throw new AnalysisException("--sensitivity '" + text + "': '" + number + "' is not a number of volts per unit");
+        }
+        return new ChannelCalibration(channel, sensitivity, unit, quantityOfUnit(unit, "--sensitivity '" + text + "'"));
+    }
+
+    private static Quantity quantityOfUnit(String unit, String where) {
+        for (Quantity q : Quantity.values()) {
+            if (q.siUnit().equals(unit)) {
+                return q;
+            }
+        }
+        List<String> units = new ArrayList<>();
+        for (Quantity q : Quantity.values()) {
+            units.add(q.siUnit() + " (" + q.name().toLowerCase(Locale.ROOT) + ")");
+        }
+        throw new AnalysisException(where + ": unit '" + unit + "' is not one of " + String.join(", ", units));
+    }
+
+    /**
+     * Reads a calibration file.
+     *
+     * @param file the JSON file
+     * @return its calibrations, in file order
+     * @throws IOException when the file cannot be read
+     */
+    static List<ChannelCalibration> readFile(Path file) throws IOException {
+        JsonNode root;
+        try {
+            root = ResultJson.MAPPER.readTree(Files.readString(file));
+        } catch (NoSuchFileException e) {
+            throw new AnalysisException(file + ": no such calibration file");
+        } catch (JsonProcessingException e) {
+            JsonLocation at = e.getLocation();
+            throw new AnalysisException(file + (at == null ? "" : ", line " + at.getLineNr() + ", column " + at.getColumnNr())
+                    + ": not valid JSON: " + e.getOriginalMessage());
+        }
+        if (root == null || !root.isObject() || !root.path("channels").isArray()) {
+            throw new AnalysisException(file + ": expected an object with a \"channels\" array of calibrations");
+        }
+        List<ChannelCalibration> result = new ArrayList<>();
+        int index = 0;
+        for (JsonNode entry : root.get("channels")) {
+            String where = file + ", channels[" + index + "]";
+            JsonNode channel = entry.path("channel");
+            JsonNode sensitivity = entry.path("sensitivityVoltsPerUnit");
+            if (!channel.isTextual() && !channel.isInt()) {
+                throw new AnalysisException(where + ": \"channel\" must be a channel name or a 0-based index");
+            }
+            if (!sensitivity.isNumber()) {
+                throw new AnalysisException(where + ": \"sensitivityVoltsPerUnit\" must be a number of volts per unit");
+            }
+            if (!entry.path("quantity").isTextual()) {
+                throw new AnalysisException(where + ": \"quantity\" must be force, displacement, velocity, acceleration"
+                        + " or voltage");
+            }
+            try {
+                Quantity quantity = Quantity.of(entry.get("quantity").asText());
+                String unit = entry.path("unit").isTextual() ? entry.get("unit").asText() : quantity.siUnit();
+                result.add(new ChannelCalibration(channel.asText(), sensitivity.asDouble(), unit, quantity));
+            } catch (AnalysisException e) {
+                throw new AnalysisException(where + ": " + e.getMessage(), e);
+            }
+            index++;
+        }
+        return result;
+    }
+}
