@@ -23,6 +23,7 @@ final class ProgressBar {
     private final long startNs = System.nanoTime();
     private long lastDrawNs;
     private int lastTenth = -1;
+    private boolean finished;
 
     ProgressBar(PrintStream out, boolean interactive) {
         this.out = out;
@@ -52,6 +53,10 @@ final class ProgressBar {
     }
 
     private void draw(double fraction, boolean last, String line) {
+        if (finished) {
+            return;
+        }
+        finished = last;
         if (interactive) {
             long now = System.nanoTime();
             if (!last && now - lastDrawNs < REDRAW_INTERVAL_NS) {
