@@ -3,60 +3,47 @@ package org.tautline.app.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 
 import org.junit.jupiter.api.Test;
-import picocli.CommandLine;
 
 class CommandLineTest {
-    private static String[] run(String... args) {
-        CommandLine cl = Main.commandLine();
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        cl.setOut(new PrintWriter(out));
-        cl.setErr(new PrintWriter(err));
-        int code = cl.execute(args);
-        return new String[] {Integer.toString(code), out.toString(), err.toString()};
-    }
-
     @Test
     void benchHelpListsTheSimulatorBenchmark() {
-        String[] r = run("bench", "--help");
-        assertEquals("0", r[0]);
-        assertTrue(r[1].contains("simulator"), r[1]);
+        CliRun r = CliRun.of("bench", "--help");
+        assertEquals(0, r.exitCode());
+        assertTrue(r.out().contains("simulator"), r.out());
     }
 
     @Test
     void benchSimulatorPrintsItsFiguresAsJson() throws Exception {
-        String[] r = run("bench", "simulator", "--seconds", "2", "--json");
-        assertEquals("0", r[0], r[2]);
-        var node = ResultJson.MAPPER.readTree(r[1]);
+        CliRun r = CliRun.of("bench", "simulator", "--seconds", "2", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        var node = ResultJson.MAPPER.readTree(r.out());
         assertEquals("simulator", node.get("benchmark").asText());
         assertEquals(2.0, node.get("rigTimeS").asDouble(), 1e-3);
-        assertTrue(node.get("realTimeMultiple").asDouble() > 0, r[1]);
+        assertTrue(node.get("realTimeMultiple").asDouble() > 0, r.out());
         assertEquals(30, node.get("modes").asInt());
     }
 
     @Test
     void anUnknownCommandIsNamedInTheError() {
-        String[] r = run("qualify-everything");
-        assertEquals("2", r[0]);
-        assertTrue(r[2].contains("Unmatched argument at index 0: 'qualify-everything'"), r[2]);
+        CliRun r = CliRun.of("qualify-everything");
+        assertEquals(2, r.exitCode());
+        assertTrue(r.err().contains("Unmatched argument at index 0: 'qualify-everything'"), r.err());
     }
 
     @Test
     void aBadNumberIsNamedInTheError() {
-        String[] r = run("bench", "simulator", "--seconds", "lots");
-        assertEquals("2", r[0]);
-        assertTrue(r[2].contains("Invalid value for option '--seconds': 'lots' is not a double"), r[2]);
+        CliRun r = CliRun.of("bench", "simulator", "--seconds", "lots");
+        assertEquals(2, r.exitCode());
+        assertTrue(r.err().contains("Invalid value for option '--seconds': 'lots' is not a double"), r.err());
     }
 
     @Test
     void theTopLevelHelpListsTheCommands() {
-        String[] r = run("--help");
-        assertEquals("0", r[0]);
-        assertTrue(r[1].contains("demo"), r[1]);
-        assertTrue(r[1].contains("bench"), r[1]);
+        CliRun r = CliRun.of("--help");
+        assertEquals(0, r.exitCode());
+        assertTrue(r.out().contains("demo"), r.out());
+        assertTrue(r.out().contains("bench"), r.out());
     }
 }

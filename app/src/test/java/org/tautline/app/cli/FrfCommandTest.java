@@ -4,8 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.io.Writer;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -20,7 +18,6 @@ import org.junit.jupiter.api.io.TempDir;
 import org.tautline.analysis.frf.Frf;
 import org.tautline.analysis.frf.FrfCsvReader;
 import org.tautline.analysis.frf.FrfQuantity;
-import picocli.CommandLine;
 
 /** {@code tautline frf} on a recording whose true FRF is known exactly: a digital resonator. */
 class FrfCommandTest {
@@ -62,24 +59,14 @@ class FrfCommandTest {
         return new Complex(GAIN).divide(Complex.ONE.subtract(z1.multiply(A1)).subtract(z1.multiply(z1).multiply(A2)));
     }
 
-    private static String[] run(String... args) {
-        CommandLine cl = Main.commandLine();
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        cl.setOut(new PrintWriter(out));
-        cl.setErr(new PrintWriter(err));
-        int code = cl.execute(args);
-        return new String[] {Integer.toString(code), out.toString(), err.toString()};
-    }
-
     @Test
     void estimatesTheKnownFrfWithinItsOwnRandomError() throws Exception {
         Path out = dir.resolve("out/frf.csv");
-        String[] r = run("frf", "--input", recording.toString(), "--force", "force", "--response", "1", "--segment", "4000",
+        CliRun r = CliRun.of("frf", "--input", recording.toString(), "--force", "force", "--response", "1", "--segment", "4000",
                 "--sensitivity", "force=1,N", "--sensitivity", "response=1,m", "--out", out.toString(), "--json",
                 "--no-progress");
-        assertEquals("0", r[0], r[2]);
-        JsonNode summary = ResultJson.MAPPER.readTree(r[1]);
+        assertEquals(0, r.exitCode(), r.err());
+        JsonNode summary = ResultJson.MAPPER.readTree(r.out());
         assertEquals(2000, summary.get("lines").asInt());
         assertEquals("receptance", summary.get("quantity").asText());
         assertEquals(99, summary.get("averages").asInt(), "(200000 - 4000) / 2000 + 1 segments at 50 % overlap");
@@ -108,29 +95,29 @@ class FrfCommandTest {
 
     @Test
     void anUncalibratedRecordingNeedsAQuantity() {
-        String[] r = run("frf", "--input", recording.toString(), "--force", "0", "--response", "1", "--out",
+        CliRun r = CliRun.of("frf", "--input", recording.toString(), "--force", "0", "--response", "1", "--out",
                 dir.resolve("x.csv").toString(), "--no-progress");
-        assertEquals("1", r[0]);
+        assertEquals(1, r.exitCode());
         assertEquals("tautline: say what the FRF relates: calibrate both channels (--calibration or --sensitivity) or give"
-                + " --quantity receptance|mobility|accelerance for raw ratios", r[2].strip());
+                + " --quantity receptance|mobility|accelerance for raw ratios", r.err().strip());
     }
 
     @Test
     void anUnknownChannelNamesTheChannelsThereAre() {
-        String[] r = run("frf", "--input", recording.toString(), "--force", "load", "--response", "1", "--quantity",
+        CliRun r = CliRun.of("frf", "--input", recording.toString(), "--force", "load", "--response", "1", "--quantity",
                 "receptance", "--out", dir.resolve("x.csv").toString(), "--no-progress");
-        assertEquals("1", r[0]);
+        assertEquals(1, r.exitCode());
         assertEquals("tautline: channel 'load' is not in the recording: expected a 0-based index below 2 or one of the"
-                + " names [force, response]", r[2].strip());
+                + " names [force, response]", r.err().strip());
     }
 
     @Test
     void aBadWindowNameSaysWhichAreKnown() {
-        String[] r = run("frf", "--input", recording.toString(), "--force", "0", "--response", "1", "--quantity",
+        CliRun r = CliRun.of("frf", "--input", recording.toString(), "--force", "0", "--response", "1", "--quantity",
                 "receptance", "--window", "triangle", "--out", dir.resolve("x.csv").toString());
-        assertEquals("1", r[0]);
+        assertEquals(1, r.exitCode());
         assertEquals("tautline: --window 'triangle': expected rectangular, hann, hamming, blackman-harris-3,"
-                + " blackman-harris-4 or flat-top", r[2].strip());
+                + " blackman-harris-4 or flat-top", r.err().strip());
     }
 
     @Test
@@ -138,20 +125,20 @@ class FrfCommandTest {
         Path calibration = dir.resolve("cal.json");
         Files.writeString(calibration, "{\"channels\": [{\"channel\": \"force\", \"quantity\": \"force\","
                 + " \"sensitivityVoltsPerUnit\": 0.0225, \"unit\": \"lbf\"}]}");
-        String[] r = run("frf", "--input", recording.toString(), "--force", "0", "--response", "1", "--calibration",
+        CliRun r = CliRun.of("frf", "--input", recording.toString(), "--force", "0", "--response", "1", "--calibration",
                 calibration.toString(), "--out", dir.resolve("x.csv").toString());
-        assertEquals("1", r[0]);
+        assertEquals(1, r.exitCode());
         assertEquals("tautline: " + calibration + ", channels[0]: calibration of channel 'force': unit 'lbf' does not"
-                + " match force; expected 'N' (sensitivities are volts per SI unit)", r[2].strip());
+                + " match force; expected 'N' (sensitivities are volts per SI unit)", r.err().strip());
     }
 
     @Test
     void brokenCalibrationJsonIsNamedByLine() throws IOException {
         Path calibration = dir.resolve("broken.json");
         Files.writeString(calibration, "{\"channels\": [\n  {\"channel\": \"force\",,}\n]}");
-        String[] r = run("frf", "--input", recording.toString(), "--force", "0", "--response", "1", "--calibration",
+        CliRun r = CliRun.of("frf", "--input", recording.toString(), "--force", "0", "--response", "1", "--calibration",
                 calibration.toString(), "--out", dir.resolve("x.csv").toString());
-        assertEquals("1", r[0]);
-        assertTrue(r[2].startsWith("tautline: " + calibration + ", line 2, column "), r[2]);
+        assertEquals(1, r.exitCode());
+        assertTrue(r.err().startsWith("tautline: " + calibration + ", line 2, column "), r.err());
     }
 }
