@@ -139,8 +139,8 @@ public final class StabilisationChart {
     private static Complex[] modalConstants(ResidueEstimator estimator, List<Pole> poles, int order) {
         Complex[] residues = estimator.residues(poles);
         if (residues == null || residues.length != poles.size()) {
-            throw new AnalysisException("the residue estimator must return one residue per pole: order " + order
-                    + " has " + poles.size() + " poles, got " + (residues == null ? "none" : residues.length));
+            throw new AnalysisException("the residue estimator must return one residue for each of the " + poles.size()
+                    + " poles of order " + order + ", got " + (residues == null ? "none" : residues.length));
         }
         Complex[] constants = new Complex[residues.length];
         for (int i = 0; i < residues.length; i++) {
