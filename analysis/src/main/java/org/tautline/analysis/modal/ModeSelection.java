@@ -137,6 +137,9 @@ public final class ModeSelection {
      * @return a new selection
      */
     public ModeSelection withDropped(int index) {
+        if (entries.isEmpty()) {
+            throw new AnalysisException("cannot drop pole " + index + " from an empty mode selection");
+        }
         if (index < 0 || index >= entries.size()) {
             throw new AnalysisException("cannot drop pole " + index + " from a mode selection of " + entries.size()
                     + " poles: the index must lie in 0 .. " + (entries.size() - 1));

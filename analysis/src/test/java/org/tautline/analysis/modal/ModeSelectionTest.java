@@ -119,5 +119,7 @@ class ModeSelectionTest {
         assertEquals(3, chosen.size(), "the original selection is unchanged");
         assertEquals("cannot drop pole 3 from a mode selection of 3 poles: the index must lie in 0 .. 2",
                 assertThrows(AnalysisException.class, () -> chosen.withDropped(3)).getMessage());
+        assertEquals("cannot drop pole 0 from an empty mode selection",
+                assertThrows(AnalysisException.class, () -> ModeSelection.of(List.of()).withDropped(0)).getMessage());
     }
 }
