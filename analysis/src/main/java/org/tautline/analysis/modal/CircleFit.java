@@ -117,10 +117,10 @@ public record CircleFit(Complex centre, double radius, double naturalFrequencyHz
         double zetaSum = 0;
         double etaSum = 0;
         int pairs = 0;
-        for (int b = below, a = below + 1; b >= 0 && a < n; b--, a++) {
-            if (f[b] == fr || f[a] == fr) {
-                continue;
-            }
+        // A line within 1e-9 of f_r is the resonance point itself and pairs with nothing.
+        int firstBelow = f[below] < fr * (1 - 1e-9) ? below : below - 1;
+        int firstAbove = f[below + 1] > fr * (1 + 1e-9) ? below + 1 : below + 2;
+        for (int b = firstBelow, a = firstAbove; b >= 0 && a < n; b--, a++) {
             double tb = theta[b] - phi;
             double ta = phi - theta[a];
             if (!(tb > 0 && tb <= Math.PI / 2 && ta > 0 && ta <= Math.PI / 2)) {
