@@ -65,6 +65,36 @@ class ModalRefinementTest {
     }
 
     @Test
+    void manyLinesOfEightModes() {
+        // design.md: an FRF may hold up to 100,000 lines; LSFD runs on all of them, the refinement here on 10,000
+        // (its cost grows linearly with lines). Same analytic reference as above; timings printed only.
+        List<Mode> truth = LsfdTestData.modes(8, true);
+        LsfdOptions lsfdOptions = LsfdOptions.defaults().withUpperResidual(true).withLowerResidual(true);
+        for (int count : new int[] {100_000, 10_000}) {
+            Frf h = LsfdTestData.receptance(truth, LsfdTestData.RESIDUALS, LsfdTestData.lines(20, 300, count));
+            long t0 = System.nanoTime();
+            LsfdResult start = Lsfd.fit(h, LsfdTestData.poles(truth), lsfdOptions);
+            long t1 = System.nanoTime();
+            System.out.printf("%d lines, 8 complex modes + UR + LR: LSFD %.0f ms%n", count, (t1 - t0) / 1e6);
+            assertTrue(LsfdTestData.relativeModalConstantError(start.modes(), truth) < 1e-6,
+                    "LSFD modal constants on " + count + " lines");
+            if (count > 10_000) {
+                continue;
+            }
+            ModalRefinementResult fit = ModalRefinement.refine(h, perturbed(truth), start.residualTerms(),
+                    ModalRefinementOptions.of(lsfdOptions));
+            System.out.printf("%d lines, 8 complex modes + UR + LR: refinement %.0f ms (%d iterations)%n", count,
+                    (System.nanoTime() - t1) / 1e6, fit.iterations());
+            assertTrue(LsfdTestData.relativeModalConstantError(fit.modes().stream().map(FittedMode::mode).toList(),
+                    truth) < 1e-6, "refined modal constants on " + count + " lines");
+            for (int i = 0; i < 8; i++) {
+                assertEquals(truth.get(i).frequencyHz(), fit.modes().get(i).mode().frequencyHz(),
+                        1e-6 * truth.get(i).frequencyHz(), "f of mode " + i + " on " + count + " lines");
+            }
+        }
+    }
+
+    @Test
     void lsfdThenRefinementIsAConsistentChain() {
         // LSFD with perturbed poles gives the start constants; the refinement then finds the generating model.
         List<Mode> truth = LsfdTestData.modes(3, true);
