@@ -1,0 +1,226 @@
+package org.tautline.analysis.modal;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.hipparchus.complex.Complex;
+import org.hipparchus.linear.Array2DRowRealMatrix;
+import org.hipparchus.linear.ArrayRealVector;
+import org.hipparchus.linear.RealMatrix;
+import org.hipparchus.linear.RealVector;
+import org.hipparchus.util.Pair;
+
+/**
+ * The weighted modal receptance model and its analytic Jacobian, shared by the refinement and the Cramer-Rao bound.
+ *
+ * <p>Model: H(w) = sum_r A_r/D_r(w) + UR - LR/w^2 with D_r = w_r^2 - w^2 + 2 j zeta_r w_r w
+ * (D. J. Ewins, Modal Testing, 2nd ed. 2000, ch. 2 and 4, from memory). Its derivatives, by the quotient rule:
+ * dH/dw_r = -A_r (2 w_r + 2 j zeta_r w)/D_r^2, dH/dzeta_r = -A_r (2 j w_r w)/D_r^2, dH/dA_r = 1/D_r
+ * (and j/D_r for the imaginary part), dH/dUR = 1, dH/dLR = -1/w^2.
+ *
+ * <p>Scaled parameters, all of order one at the start: per mode p_f with w_r = w0_r p_f (relative frequency),
+ * p_z with zeta_r = zeta0_r exp(p_z) (log damping, which keeps zeta positive), p_a (and p_b for complex modes)
+ * with A_r = |A0_r| (p_a + j p_b); then UR = u (p + j q) and LR = u w_lo^2 (p + j q), u the scale of |H| and
+ * w_lo the lowest line. Each line's real and imaginary parts are stacked and multiplied by sqrt(weight).
+ */
+final class ModalRefinementModel {
+    private final double[] w;
+    private final double[] root;
+    private final boolean realModes;
+    private final boolean upper;
+    private final boolean lower;
+    private final double[] w0;
+    private final double[] zeta0;
+    private final double[] aScale;
+    private final double upperScale;
+    private final double lowerScale;
+    private final double[] start;
+
+    ModalRefinementModel(double[] angularFrequencyRadPerS, double[] weight, List<Mode> modes, ResidualTerms residuals,
+                         boolean realModes, boolean upper, boolean lower, double magnitudeScale) {
+        this.w = angularFrequencyRadPerS.clone();
+        this.root = new double[weight.length];
+        for (int k = 0; k < weight.length; k++) {
+            root[k] = Math.sqrt(weight[k]);
+        }
+        this.realModes = realModes;
+        this.upper = upper;
+        this.lower = lower;
+        int n = modes.size();
+        this.w0 = new double[n];
+        this.zeta0 = new double[n];
+        this.aScale = new double[n];
+        this.upperScale = magnitudeScale;
+        double wLow = w[0];
+        this.lowerScale = magnitudeScale * wLow * wLow;
+        this.start = new double[parameterCount(n, realModes, upper, lower)];
+        int c = 0;
+        for (int r = 0; r < n; r++) {
+            Mode mode = modes.get(r);
+            w0[r] = mode.angularFrequencyRadPerS();
+            zeta0[r] = mode.dampingRatio();
+            Complex a = mode.modalConstant();
+            aScale[r] = realModes ? Math.abs(a.getReal()) : a.norm();
+            start[c++] = 1;
+            start[c++] = 0;
+            start[c++] = a.getReal() / aScale[r];
+            if (!realModes) {
+                start[c++] = a.getImaginary() / aScale[r];
+            }
+        }
+        if (upper) {
+            start[c++] = residuals.upper().getReal() / upperScale;
+            start[c++] = residuals.upper().getImaginary() / upperScale;
+        }
+        if (lower) {
+            start[c++] = residuals.lower().getReal() / lowerScale;
+            start[c] = residuals.lower().getImaginary() / lowerScale;
+        }
+    }
+
+    static int parameterCount(int modes, boolean realModes, boolean upper, boolean lower) {
+        return modes * (realModes ? 3 : 4) + (upper ? 2 : 0) + (lower ? 2 : 0);
+    }
+
+    int parameterCount() {
+        return start.length;
+    }
+
+    int valueCount() {
+        return 2 * w.length;
+    }
+
+    double[] start() {
+        return start.clone();
+    }
+
+    /** @return the whitened stacked model values and the Jacobian (rows = values), for the optimiser */
+    Pair<RealVector, RealMatrix> evaluate(RealVector point) {
+        double[] p = point.toArray();
+        double[] values = new double[valueCount()];
+        double[][] columns = jacobianColumns(p, values);
+        double[][] rows = new double[values.length][columns.length];
+        for (int j = 0; j < columns.length; j++) {
+            for (int i = 0; i < values.length; i++) {
+                rows[i][j] = columns[j][i];
+            }
+        }
+        return new Pair<>(new ArrayRealVector(values, false), new Array2DRowRealMatrix(rows, false));
+    }
+
+    /**
+     * The Jacobian by columns, filling the whitened model values when asked.
+     *
+     * @param p scaled parameters
+     * @param values receives the 2m whitened model values, or null
+     * @return one column of 2m entries per parameter
+     */
+    double[][] jacobianColumns(double[] p, double[] values) {
+        int m = w.length;
+        double[][] columns = new double[p.length][2 * m];
+        int n = w0.length;
+        for (int k = 0; k < m; k++) {
+            double wk = w[k];
+            double sq = root[k];
+            Complex sum = Complex.ZERO;
+            int c = 0;
+            for (int r = 0; r < n; r++) {
+                double wn = w0[r] * p[c];
+                double zeta = zeta0[r] * Math.exp(p[c + 1]);
+                Complex a = new Complex(aScale[r] * p[c + 2], realModes ? 0 : aScale[r] * p[c + 3]);
+                Complex inverse = new Complex(wn * wn - wk * wk, 2 * zeta * wn * wk).reciprocal();
+                Complex term = a.multiply(inverse);
+                sum = sum.add(term);
+                Complex common = term.multiply(inverse).negate();
+                put(columns[c], k, sq, common.multiply(new Complex(2 * wn, 2 * zeta * wk)).multiply(w0[r]));
+                put(columns[c + 1], k, sq, common.multiply(new Complex(0, 2 * wn * wk)).multiply(zeta));
+                put(columns[c + 2], k, sq, inverse.multiply(aScale[r]));
+                c += 3;
+                if (!realModes) {
+                    put(columns[c], k, sq, inverse.multiply(new Complex(0, aScale[r])));
+                    c++;
+                }
+            }
+            if (upper) {
+                sum = sum.add(new Complex(upperScale * p[c], upperScale * p[c + 1]));
+                put(columns[c++], k, sq, new Complex(upperScale, 0));
+                put(columns[c++], k, sq, new Complex(0, upperScale));
+            }
+            if (lower) {
+                double g = -lowerScale / (wk * wk);
+                sum = sum.add(new Complex(g * p[c], g * p[c + 1]));
+                put(columns[c++], k, sq, new Complex(g, 0));
+                put(columns[c], k, sq, new Complex(0, g));
+            }
+            if (values != null) {
+                values[2 * k] = sq * sum.getReal();
+                values[2 * k + 1] = sq * sum.getImaginary();
+            }
+        }
+        return columns;
+    }
+
+    private static void put(double[] column, int k, double sq, Complex value) {
+        column[2 * k] = sq * value.getReal();
+        column[2 * k + 1] = sq * value.getImaginary();
+    }
+
+    /** @return the angular frequency of mode r at p, rad/s (may be non-positive while iterating) */
+    double angularFrequency(double[] p, int r) {
+        return w0[r] * p[index(r)];
+    }
+
+    private int index(int r) {
+        return r * (realModes ? 3 : 4);
+    }
+
+    /**
+     * The fitted modes with standard errors.
+     *
+     * @param p scaled parameters
+     * @param covariance covariance of the scaled parameters
+     * @return one fitted mode per mode
+     */
+    List<FittedMode> fittedModes(double[] p, double[][] covariance) {
+        List<FittedMode> out = new ArrayList<>();
+        for (int r = 0; r < w0.length; r++) {
+            int c = index(r);
+            double zeta = zeta0[r] * Math.exp(p[c + 1]);
+            double im = realModes ? 0 : aScale[r] * p[c + 3];
+            Mode mode = new Mode(w0[r] * p[c] / (2 * Math.PI), zeta, new Complex(aScale[r] * p[c + 2], im));
+            double imStd = realModes ? 0 : aScale[r] * Math.sqrt(covariance[c + 3][c + 3]);
+            out.add(new FittedMode(mode, w0[r] / (2 * Math.PI) * Math.sqrt(covariance[c][c]),
+                    zeta * Math.sqrt(covariance[c + 1][c + 1]),
+                    new Complex(aScale[r] * Math.sqrt(covariance[c + 2][c + 2]), imStd)));
+        }
+        return out;
+    }
+
+    /**
+     * The residual terms, or their standard errors (UR and LR std of real and imaginary parts).
+     *
+     * @param p scaled parameters
+     * @param covariance covariance of the scaled parameters, or null for the values
+     * @return the terms or their standard errors
+     */
+    ResidualTerms residualTerms(double[] p, double[][] covariance) {
+        int c = index(w0.length);
+        Complex ur = Complex.ZERO;
+        Complex lr = Complex.ZERO;
+        if (upper) {
+            ur = pick(p, covariance, c, upperScale);
+            c += 2;
+        }
+        if (lower) {
+            lr = pick(p, covariance, c, lowerScale);
+        }
+        return new ResidualTerms(ur, lr);
+    }
+
+    private static Complex pick(double[] p, double[][] covariance, int c, double scale) {
+        if (covariance == null) {
+            return new Complex(scale * p[c], scale * p[c + 1]);
+        }
+        return new Complex(scale * Math.sqrt(covariance[c][c]), scale * Math.sqrt(covariance[c + 1][c + 1]));
+    }
+}
