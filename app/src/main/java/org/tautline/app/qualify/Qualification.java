@@ -11,7 +11,8 @@ import org.tautline.analysis.frf.Frf;
 import org.tautline.analysis.frf.FrfQuantity;
 import org.tautline.analysis.modal.ModalSynthesis;
 import org.tautline.analysis.modal.Mode;
-import org.tautline.analysis.modal.PeakPicking;
+import org.tautline.analysis.modal.ModalEstimate;
+import org.tautline.analysis.modal.ModalEstimator;
 import org.tautline.analysis.specimen.HarmonicNumbering;
 import org.tautline.analysis.specimen.StringPhysics;
 import org.tautline.analysis.verdict.Measurement;
@@ -48,8 +49,8 @@ public final class Qualification {
     public static QualificationResult analyse(SpecimenDescription specimen, SweepRecord sweep,
                                               Specification specification, long wallStartNs) {
         Frf receptance = sweep.toFrf().toQuantity(FrfQuantity.RECEPTANCE);
-        List<Mode> fitted = new ArrayList<>(PeakPicking.estimate(receptance).stream().map(p -> p.mode()).toList());
-        fitted.sort(Comparator.comparingDouble(Mode::frequencyHz));
+        ModalEstimate estimate = ModalEstimator.defaults().estimate(receptance);
+        List<Mode> fitted = estimate.plainModes();
         double[] frequencies = fitted.stream().mapToDouble(Mode::frequencyHz).toArray();
         int[] harmonics = HarmonicNumbering.number(frequencies, NUMBERING_TOLERANCE);
         List<IdentifiedMode> modes = new ArrayList<>();

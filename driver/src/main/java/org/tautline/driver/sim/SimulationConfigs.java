@@ -20,7 +20,8 @@ public final class SimulationConfigs {
      *
      * <p>L = 0.60 m, mu = 2.0e-3 kg/m, T = 150 N, EI = 6.14e-4 N m^2 (a 0.5 mm steel core with
      * E = 200 GPa), pinned ends, 30 harmonics; damping 0.003 + 0.001 (100 Hz / f) + 0.0002 (f / 1000 Hz),
-     * about 0.35 % at the fundamental; polarisation split 0.15 % with principal axis 1 at 25 degrees to
+     * about 0.35 % at the fundamental; polarisation split 0.7 % (about one half-power bandwidth, as an
+     * asymmetric clamp can make it) with principal axis 1 at 25 degrees to
      * the drive; Kirchhoff-Carrier nonlinearity on with EA = 39 000 N (steel core). Stinger at 0.07 m,
      * non-contact displacement sensor at 0.43 m along the drive direction. Shaker: 0.02 kg, 2000 N/m,
      * 1.0 N s/m, Bl 3 N/A, 4 ohm, 0.1 % second and 0.05 % third harmonic. Noise 1e-6 N/sqrt(Hz) (a sensitive
@@ -32,7 +33,7 @@ public final class SimulationConfigs {
      */
     public static SimulationConfig demoWire() {
         SimulatedSpecimen wire = new SimulatedSpecimen(0.60, 2.0e-3, 150.0, 6.14e-4, EndCondition.PINNED, 30,
-                DampingModel.of(0.003, 0.001, 100.0, 0.0002, 1000.0), 0.0015, Math.toRadians(25.0), true, 39000.0);
+                DampingModel.of(0.003, 0.001, 100.0, 0.0002, 1000.0), 0.007, Math.toRadians(25.0), true, 39000.0);
         ShakerModel shaker = new ShakerModel(0.02, 2000.0, 1.0, 3.0, 4.0, 0.001, 0.0005);
         SensorSetup sensors = new SensorSetup(0.07, 0.43, ResponseSensor.DISPLACEMENT, 0.0, 0.0, 1e-6, 2e-10, 5.0,
                 1e-3, 24, 50.0, 2e-9, 3);

@@ -23,7 +23,12 @@ public record SweepRecord(SteppedSinePlan plan, String responseQuantity, List<Sw
     }
 
     /**
-     * The FRF of the completed steps, with each step's relative residual as its quality figure.
+     * The FRF of the completed steps, with each step's relative residual as its quality figure and
+     * the variance of each value from the sine fits' standard errors.
+     *
+     * <p>The variance E|H_est - H|^2 is taken as 2 |H|^2 r^2, r the relative standard error of |H|:
+     * for small errors the phase error (rad) of a ratio of phasors is about as large as its relative
+     * magnitude error (Bendat and Piersol, Random Data, 2010, from memory), and the two add.
      *
      * @return the FRF in the quantity of the response channel (receptance for displacement)
      */
@@ -33,13 +38,16 @@ public record SweepRecord(SteppedSinePlan plan, String responseQuantity, List<Sw
         double[] re = new double[n];
         double[] im = new double[n];
         double[] quality = new double[n];
+        double[] variance = new double[n];
         for (int i = 0; i < n; i++) {
             SweepPoint p = points.get(i);
             f[i] = p.frequencyHz();
             re[i] = p.response().getReal();
             im[i] = p.response().getImaginary();
             quality[i] = p.relativeResidual();
+            double magnitude = p.response().norm();
+            variance[i] = 2 * magnitude * magnitude * p.relativeStdError() * p.relativeStdError();
         }
-        return Frf.of(f, re, im, FrfQuantity.forResponse(responseQuantity)).withQuality(quality);
+        return Frf.of(f, re, im, FrfQuantity.forResponse(responseQuantity)).withQuality(quality).withVariance(variance);
     }
 }
