@@ -1,0 +1,11 @@
+package org.tautline.analysis.specimen;
+
+/** How a tension estimate was obtained. */
+public enum TensionMethod {
+    /** Pinned ends: weighted straight line of (f_n/n)^2 against n^2 (Fletcher 1964), T and EI both fitted. */
+    PINNED_LINE_FIT,
+    /** Clamped ends: nonlinear least squares of the exact clamped beam-string roots, T and EI both fitted. */
+    CLAMPED_EXACT_FIT,
+    /** One harmonic only: T from it with the specimen's stated EI (zero: Mersenne's law). */
+    SINGLE_HARMONIC
+}
