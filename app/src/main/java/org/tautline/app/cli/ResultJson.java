@@ -5,13 +5,16 @@ import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.hipparchus.complex.Complex;
+import org.tautline.analysis.modal.FittedMode;
+import org.tautline.analysis.modal.ModalEstimate;
 import org.tautline.analysis.modal.Mode;
+import org.tautline.analysis.specimen.AbsentHarmonic;
+import org.tautline.analysis.specimen.Specimen;
 import org.tautline.analysis.verdict.LimitResult;
 import org.tautline.analysis.verdict.Verdict;
 import org.tautline.app.qualify.DemoOutcome;
-import org.tautline.app.qualify.IdentifiedMode;
 import org.tautline.app.qualify.QualificationResult;
-import org.tautline.app.qualify.SpecimenDescription;
+import org.tautline.app.qualify.QualifiedMode;
 import org.tautline.app.qualify.TruthComparison;
 import org.tautline.driver.sim.SimulatedSpecimen;
 import org.tautline.driver.sim.SimulationConfig;
@@ -26,42 +29,105 @@ final class ResultJson {
     }
 
     static ObjectNode outcome(DemoOutcome outcome) {
-        QualificationResult r = outcome.result();
+        ObjectNode root = result(outcome.result());
+        ObjectNode ordered = MAPPER.createObjectNode();
+        ordered.set("specimen", root.get("specimen"));
+        ordered.set("truth", truth(outcome.truth()));
+        root.remove("specimen");
+        ordered.setAll(root);
+        ArrayNode modes = (ArrayNode) ordered.get("modes");
+        for (int i = 0; i < modes.size(); i++) {
+            ObjectNode m = (ObjectNode) modes.get(i);
+            Mode estimate = outcome.result().modes().get(i).mode();
+            TruthComparison.nearest(outcome.truth(), estimate).ifPresent(t -> {
+                m.put("truthFrequencyHz", t.mode().frequencyHz());
+                m.put("frequencyErrorRelative", TruthComparison.frequencyError(estimate, t));
+            });
+        }
+        return ordered;
+    }
+
+    /** A qualification or fit result: specimen, modes with standard errors, properties, verdict. */
+    static ObjectNode result(QualificationResult r) {
         ObjectNode root = MAPPER.createObjectNode();
         root.set("specimen", specimen(r.specimen()));
-        root.set("truth", truth(outcome.truth()));
         ArrayNode modes = root.putArray("modes");
-        for (IdentifiedMode m : r.modes()) {
-            ObjectNode node = mode(m.mode());
+        for (QualifiedMode m : r.modes()) {
+            ObjectNode node = fittedMode(m.fitted());
             node.put("harmonic", m.harmonic());
-            TruthComparison.nearest(outcome.truth(), m.mode()).ifPresent(t -> {
-                node.put("truthFrequencyHz", t.mode().frequencyHz());
-                node.put("frequencyErrorRelative", TruthComparison.frequencyError(m.mode(), t));
-            });
+            node.put("polarisation", m.polarisation());
             modes.add(node);
         }
+        ArrayNode absent = root.putArray("absentHarmonics");
+        for (AbsentHarmonic a : r.harmonics().absent()) {
+            ObjectNode node = absent.addObject();
+            node.put("harmonic", a.harmonic());
+            node.put("expectedFrequencyHz", a.expectedFrequencyHz());
+            node.put("reason", a.explanation());
+        }
+        modal(root, r.modal());
         ObjectNode properties = root.putObject("properties");
         r.tension().ifPresent(t -> {
             properties.put("tensionN", t.tensionN());
-            properties.put("tensionStdN", t.tensionStdN());
-            properties.put("tensionMethod", t.method());
+            putFinite(properties, "tensionStdN", t.tensionStdN());
+            putFinite(properties, "bendingStiffnessNm2", t.bendingStiffnessNm2());
+            putFinite(properties, "bendingStiffnessStdNm2", t.bendingStiffnessStdNm2());
+            putFinite(properties, "inharmonicityB", t.inharmonicityB());
+            properties.put("tensionMethod", t.method().name().toLowerCase(java.util.Locale.ROOT));
         });
-        root.put("rigTimeS", r.sweep().rigTimeS());
+        r.participation().ifPresent(p -> {
+            putFinite(properties, "forcingPositionM", p.forcingPositionM());
+            putFinite(properties, "forcingPositionStdM", p.forcingPositionStdM());
+            putFinite(properties, "sensorPositionM", p.sensorPositionM());
+            putFinite(properties, "sensorPositionStdM", p.sensorPositionStdM());
+            putFinite(properties, "linearDensityKgPerM", p.effectiveLinearDensityKgPerM());
+            properties.put("forcingPositionMismatch", p.forcingMismatch());
+            properties.put("sensorPositionMismatch", p.sensorMismatch());
+        });
+        r.sweep().ifPresent(sweep -> {
+            root.put("rigTimeS", sweep.rigTimeS());
+            root.put("steps", sweep.points().size());
+            root.put("sweepCompleted", sweep.completed());
+        });
         root.put("wallTimeS", r.wallTimeS());
-        root.put("steps", r.sweep().points().size());
-        root.put("sweepCompleted", r.sweep().completed());
         root.set("verdict", verdict(r.verdict()));
         return root;
     }
 
-    static ObjectNode specimen(SpecimenDescription s) {
+    /** The modal fit's residual terms, quality and warnings. */
+    static void modal(ObjectNode root, ModalEstimate modal) {
+        ObjectNode residuals = root.putObject("residuals");
+        residuals.set("upper", complex(modal.residualTerms().upper()));
+        residuals.set("lower", complex(modal.residualTerms().lower()));
+        ObjectNode quality = root.putObject("quality");
+        quality.put("bandLowHz", modal.bandLowHz());
+        quality.put("bandHighHz", modal.bandHighHz());
+        modal.quality().ifPresent(q -> {
+            putFinite(quality, "normalisedResidual", q.normalisedResidual());
+            putFinite(quality, "correlation", q.correlation());
+        });
+        ArrayNode warnings = root.putArray("warnings");
+        modal.warnings().forEach(warnings::add);
+    }
+
+    static ObjectNode fittedMode(FittedMode f) {
+        ObjectNode node = mode(f.mode());
+        putFinite(node, "frequencyStdHz", f.frequencyStdHz());
+        putFinite(node, "dampingRatioStd", f.dampingRatioStd());
+        ObjectNode std = node.putObject("modalConstantStd");
+        putFinite(std, "re", f.modalConstantStd().getReal());
+        putFinite(std, "im", f.modalConstantStd().getImaginary());
+        return node;
+    }
+
+    static ObjectNode specimen(Specimen s) {
         ObjectNode node = MAPPER.createObjectNode();
         node.put("id", s.id());
-        node.put("description", s.description());
         node.put("lengthM", s.lengthM());
         node.put("tensionN", s.nominalTensionN());
         node.put("linearDensityKgPerM", s.linearDensityKgPerM());
         node.put("linearDensityStdKgPerM", s.linearDensityStdKgPerM());
+        node.put("bendingStiffnessNm2", s.bendingStiffnessNm2());
         node.put("forcingPositionM", s.forcingPositionM());
         node.put("sensorPositionM", s.sensorPositionM());
         node.put("ends", s.ends().name().toLowerCase(java.util.Locale.ROOT));

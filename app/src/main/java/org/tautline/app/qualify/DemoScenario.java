@@ -1,8 +1,10 @@
 package org.tautline.app.qualify;
 
 import java.util.List;
+import java.util.Optional;
 
 import org.tautline.analysis.specimen.EndCondition;
+import org.tautline.analysis.specimen.Specimen;
 import org.tautline.analysis.verdict.Limit;
 import org.tautline.analysis.verdict.Specification;
 import org.tautline.driver.sim.SimulationConfig;
@@ -27,10 +29,20 @@ public final class DemoScenario {
         return demo.withSpecimen(demo.specimen().withTensionN(TRUE_TENSION_N));
     }
 
-    /** @return what the technician states about the specimen (nominal values) */
-    public static SpecimenDescription specimen() {
-        return new SpecimenDescription("DEMO-TW-0042", "polymer-jacketed steel tie wire (invented demo specimen)",
-                0.60, 150.0, 2.0e-3, 0.02e-3, 0.07, 0.43, EndCondition.PINNED);
+    /** A line for people: what the demo specimen is. */
+    public static final String DESCRIPTION = "polymer-jacketed steel tie wire (invented demo specimen)";
+
+    /**
+     * What the technician states about the specimen: nominal values from its (invented) data sheet.
+     *
+     * <p>mu 2.0e-3 kg/m +/- 1 %, EI 6.14e-4 N m^2 (0.5 mm steel core) +/- 10 %, EA 39 000 N, pinned
+     * ends on a 0.60 m span, stinger at 0.07 m, sensor at 0.43 m along the drive, nominal 150 N.
+     *
+     * @return the stated specimen
+     */
+    public static Specimen specimen() {
+        return new Specimen("DEMO-TW-0042", 0.60, 2.0e-3, 0.02e-3, 6.14e-4, 0.614e-4, EndCondition.PINNED, 0.07, 0.43,
+                150.0, 0.0, 0.0, 39000.0, Optional.empty());
     }
 
     /** @return the demo specification: the limits the wire must meet */
@@ -38,6 +50,9 @@ public final class DemoScenario {
         return new Specification("demo tie wire, invented", List.of(
                 Limit.between("fundamental frequency", "f1Hz", "Hz", 215.0, 245.0),
                 Limit.between("tension", "tensionN", "N", 135.0, 165.0),
+                Limit.atMost("inharmonicity", "inharmonicityB", "", 1e-3),
+                Limit.between("damping of the fundamental", "dampingRatio1", "", 0.001, 0.01),
+                Limit.between("stinger position", "forcingPositionM", "m", 0.055, 0.085),
                 Limit.atMost("FRF standard error at resonances", "resonanceFrfRelativeStdError", "", 0.05)));
     }
 

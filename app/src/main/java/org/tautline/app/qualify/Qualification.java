@@ -1,20 +1,28 @@
 package org.tautline.app.qualify;
 
 import java.util.ArrayList;
-import java.util.Comparator;
-import java.util.HashMap;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
+import org.tautline.analysis.AnalysisException;
 import org.tautline.analysis.frf.Frf;
 import org.tautline.analysis.frf.FrfQuantity;
-import org.tautline.analysis.modal.ModalSynthesis;
-import org.tautline.analysis.modal.Mode;
+import org.tautline.analysis.modal.FittedMode;
 import org.tautline.analysis.modal.ModalEstimate;
 import org.tautline.analysis.modal.ModalEstimator;
-import org.tautline.analysis.specimen.HarmonicNumbering;
-import org.tautline.analysis.specimen.StringPhysics;
+import org.tautline.analysis.modal.ModalSynthesis;
+import org.tautline.analysis.modal.Mode;
+import org.tautline.analysis.specimen.AssignedMode;
+import org.tautline.analysis.specimen.HarmonicAssigner;
+import org.tautline.analysis.specimen.HarmonicAssignment;
+import org.tautline.analysis.specimen.NumberedFrequency;
+import org.tautline.analysis.specimen.ParticipationPattern;
+import org.tautline.analysis.specimen.PatternFit;
+import org.tautline.analysis.specimen.Specimen;
+import org.tautline.analysis.specimen.TensionEstimate;
+import org.tautline.analysis.specimen.TensionEstimator;
 import org.tautline.analysis.verdict.Measurement;
 import org.tautline.analysis.verdict.Specification;
 import org.tautline.analysis.verdict.Verdict;
@@ -22,17 +30,19 @@ import org.tautline.driver.sweep.SweepPoint;
 import org.tautline.driver.sweep.SweepRecord;
 
 /**
- * The analysis half of a qualification: sweep record to modes, tension and verdict.
+ * The analysis half of a qualification: FRF to modes, harmonics, properties and verdict.
  *
- * <p>Modes come from peak picking with half-power damping (the first estimator); harmonics are
- * numbered where obvious; the tension follows from the fundamental by Mersenne's law,
- * T = 4 mu L^2 f1^2, with a standard uncertainty propagated from the frequency resolution of the
- * sweep (half the local step spacing, taken as a rectangular distribution, GUM JCGM 100:2008
- * 4.3.7) and the stated uncertainty of mu.
+ * <p>Modes come from the modal estimator (LSCF, LSFD, joint refinement); harmonics, doublets and
+ * absent harmonics from the stiff-string numbering; tension and bending stiffness from the whole
+ * harmonic series weighted by the modes' standard errors; forcing and sensor positions from the
+ * pattern of modal constants. Every figure goes to the verdict with its standard uncertainty.
+ * Figure keys: {@code f1Hz}, {@code tensionN}, {@code bendingStiffnessNm2}, {@code inharmonicityB},
+ * {@code dampingRatio1}.. (per harmonic), {@code forcingPositionM}, {@code sensorPositionM},
+ * {@code fitNormalisedResidual} and, after a sweep, {@code resonanceFrfRelativeStdError}.
  */
 public final class Qualification {
-    /** How far from n f1 a mode may lie and still be numbered (a nearly ideal string). */
-    private static final double NUMBERING_TOLERANCE = 0.02;
+    /** Doublets: two polarisations of one harmonic lie within this relative split (a few half-power bandwidths). */
+    private static final double DOUBLET_SPLIT = 0.02;
 
     private Qualification() {
     }
@@ -46,55 +56,122 @@ public final class Qualification {
      * @param wallStartNs {@link System#nanoTime()} when the qualification started
      * @return the result
      */
-    public static QualificationResult analyse(SpecimenDescription specimen, SweepRecord sweep,
+    public static QualificationResult analyse(Specimen specimen, SweepRecord sweep, Specification specification,
+                                              long wallStartNs) {
+        return analyse(specimen, sweep.toFrf(), Optional.of(sweep), specification, wallStartNs);
+    }
+
+    /**
+     * Analyses an FRF.
+     *
+     * @param specimen what was stated about the specimen
+     * @param frf the measured FRF, any quantity
+     * @param sweep the sweep it came from, if any
+     * @param specification the limits to judge against
+     * @param wallStartNs {@link System#nanoTime()} when the qualification started
+     * @return the result
+     */
+    public static QualificationResult analyse(Specimen specimen, Frf frf, Optional<SweepRecord> sweep,
                                               Specification specification, long wallStartNs) {
-        Frf receptance = sweep.toFrf().toQuantity(FrfQuantity.RECEPTANCE);
-        ModalEstimate estimate = ModalEstimator.defaults().estimate(receptance);
-        List<Mode> fitted = estimate.plainModes();
-        double[] frequencies = fitted.stream().mapToDouble(Mode::frequencyHz).toArray();
-        int[] harmonics = HarmonicNumbering.number(frequencies, NUMBERING_TOLERANCE);
-        List<IdentifiedMode> modes = new ArrayList<>();
+        Frf receptance = frf.toQuantity(FrfQuantity.RECEPTANCE);
+        ModalEstimate modal = ModalEstimator.defaults().estimate(receptance);
+        List<FittedMode> fitted = modal.modes();
+        HarmonicAssignment harmonics = new HarmonicAssigner().withSplitTolerance(DOUBLET_SPLIT)
+                .assign(specimen, fitted, Double.NaN, modal.bandLowHz(), modal.bandHighHz());
+        List<QualifiedMode> modes = new ArrayList<>();
         for (int i = 0; i < fitted.size(); i++) {
-            modes.add(new IdentifiedMode(harmonics[i], fitted.get(i)));
+            modes.add(new QualifiedMode(fitted.get(i), harmonics.harmonicOf(i), polarisationOf(harmonics, i)));
         }
-        Frf synthesized = ModalSynthesis.synthesize(fitted, receptance.frequenciesHz(), FrfQuantity.RECEPTANCE);
-        Optional<IdentifiedMode> fundamental = modes.stream().filter(m -> m.harmonic() == 1)
-                .max(Comparator.comparingDouble(m -> m.mode().modalConstant().norm()));
-        Optional<TensionEstimate> tension = fundamental.map(m -> tensionFrom(m, specimen, receptance));
-
-        Map<String, Measurement> measured = new HashMap<>();
-        fundamental.ifPresent(m -> measured.put("f1Hz",
-                new Measurement(m.mode().frequencyHz(), frequencyUncertaintyHz(receptance, m.mode().frequencyHz()), "Hz")));
-        tension.ifPresent(t -> measured.put("tensionN", new Measurement(t.tensionN(), t.tensionStdN(), "N")));
-        if (!fitted.isEmpty()) {
-            measured.put("resonanceFrfRelativeStdError", new Measurement(worstStdErrorNear(sweep, fitted), 0.0, ""));
+        Optional<TensionEstimate> tension = Optional.empty();
+        List<NumberedFrequency> series = dominantSeries(modes);
+        if (!series.isEmpty()) {
+            tension = Optional.of(new TensionEstimator().estimate(specimen, series));
         }
+        Optional<PatternFit> participation;
+        try {
+            participation = fitted.isEmpty() ? Optional.empty()
+                    : Optional.of(new ParticipationPattern().fit(specimen, harmonics, fitted));
+        } catch (AnalysisException e) {
+            participation = Optional.empty();
+        }
+        Map<String, Measurement> measured = measurements(modes, tension, participation, modal, sweep);
         Verdict verdict = Verdict.evaluate(specification, measured);
+        Frf synthesized = ModalSynthesis.synthesize(modal.plainModes(), receptance.frequenciesHz(), FrfQuantity.RECEPTANCE);
         double wallS = (System.nanoTime() - wallStartNs) * 1e-9;
-        return new QualificationResult(specimen, sweep, receptance, synthesized, modes, tension, verdict, wallS);
+        return new QualificationResult(specimen, sweep, receptance, synthesized, modal, modes, harmonics, tension,
+                participation, measured, verdict, wallS);
     }
 
-    private static TensionEstimate tensionFrom(IdentifiedMode fundamental, SpecimenDescription specimen, Frf receptance) {
-        double f1 = fundamental.mode().frequencyHz();
-        double tensionN = StringPhysics.mersenneTensionN(f1, 1, specimen.lengthM(), specimen.linearDensityKgPerM());
-        double relF = frequencyUncertaintyHz(receptance, f1) / f1;
-        double relMu = specimen.linearDensityStdKgPerM() / specimen.linearDensityKgPerM();
-        double stdN = tensionN * Math.hypot(2 * relF, relMu);
-        return new TensionEstimate(tensionN, stdN, 1, "Mersenne's law from f1");
+    private static int polarisationOf(HarmonicAssignment harmonics, int modeIndex) {
+        for (AssignedMode m : harmonics.modes()) {
+            if (m.modeIndex() == modeIndex) {
+                return m.polarisation();
+            }
+        }
+        return 0;
     }
 
-    /** Half the local line spacing as a rectangular half-width: u = (spacing/2)/sqrt(3). */
-    static double frequencyUncertaintyHz(Frf frf, double frequencyHz) {
-        int n = frf.size();
-        if (n < 2) {
-            return 0.0;
+    /**
+     * The harmonic series for the tension fit: one frequency per harmonic, that of its strongest mode.
+     *
+     * <p>The two polarisations of a doublet see slightly different end stiffness (that is what splits
+     * them), so they do not lie on one stiff-string line; the polarisation the drive excites most
+     * stands for the harmonic, as it does for f1.
+     */
+    private static List<NumberedFrequency> dominantSeries(List<QualifiedMode> modes) {
+        List<NumberedFrequency> series = new ArrayList<>();
+        int top = modes.stream().mapToInt(QualifiedMode::harmonic).max().orElse(0);
+        for (int n = 1; n <= top; n++) {
+            dominant(modes, n).ifPresent(d -> series.add(new NumberedFrequency(d.harmonic(), d.mode().frequencyHz(),
+                    d.fitted().frequencyStdHz())));
         }
-        int i = 1;
-        while (i < n - 1 && frf.frequencyHz(i) < frequencyHz) {
-            i++;
+        return series;
+    }
+
+    /** The strongest mode of each harmonic stands for it (the dominant polarisation of a doublet). */
+    static Optional<QualifiedMode> dominant(List<QualifiedMode> modes, int harmonic) {
+        return modes.stream().filter(m -> m.harmonic() == harmonic)
+                .max((a, b) -> Double.compare(a.mode().modalConstant().norm(), b.mode().modalConstant().norm()));
+    }
+
+    private static Map<String, Measurement> measurements(List<QualifiedMode> modes, Optional<TensionEstimate> tension,
+                                                         Optional<PatternFit> participation, ModalEstimate modal,
+                                                         Optional<SweepRecord> sweep) {
+        Map<String, Measurement> m = new LinkedHashMap<>();
+        dominant(modes, 1).ifPresent(f1 -> putKnown(m, "f1Hz", f1.mode().frequencyHz(), f1.fitted().frequencyStdHz(), "Hz"));
+        tension.ifPresent(t -> {
+            m.put("tensionN", new Measurement(t.tensionN(), t.tensionStdN(), "N"));
+            m.put("bendingStiffnessNm2", new Measurement(t.bendingStiffnessNm2(), t.bendingStiffnessStdNm2(), "N m^2"));
+            double relB = Math.hypot(t.bendingStiffnessNm2() > 0 ? t.bendingStiffnessStdNm2() / t.bendingStiffnessNm2() : 0,
+                    t.tensionStdN() / t.tensionN());
+            m.put("inharmonicityB", new Measurement(t.inharmonicityB(), Math.abs(t.inharmonicityB()) * relB, ""));
+        });
+        int top = modes.stream().mapToInt(QualifiedMode::harmonic).max().orElse(0);
+        for (int n = 1; n <= top; n++) {
+            dominant(modes, n).ifPresent(d -> putKnown(m, "dampingRatio" + d.harmonic(), d.mode().dampingRatio(),
+                    d.fitted().dampingRatioStd(), ""));
         }
-        double spacing = frf.frequencyHz(i) - frf.frequencyHz(i - 1);
-        return spacing / 2 / Math.sqrt(3);
+        participation.ifPresent(p -> {
+            putKnown(m, "forcingPositionM", p.forcingPositionM(), p.forcingPositionStdM(), "m");
+            putKnown(m, "sensorPositionM", p.sensorPositionM(), p.sensorPositionStdM(), "m");
+        });
+        modal.quality().ifPresent(q -> m.put("fitNormalisedResidual", new Measurement(q.normalisedResidual(), 0, "")));
+        sweep.ifPresent(s -> {
+            if (!modes.isEmpty()) {
+                m.put("resonanceFrfRelativeStdError", new Measurement(worstStdErrorNear(s, modal.plainModes()), 0, ""));
+            }
+        });
+        return m;
+    }
+
+    /**
+     * Records a figure only when its uncertainty is known: a figure without one (a refinement that
+     * failed) is left out, so the verdict calls its limit not determinable rather than trusting it.
+     */
+    private static void putKnown(Map<String, Measurement> m, String key, double value, double std, String unit) {
+        if (Double.isFinite(value) && Double.isFinite(std) && std >= 0) {
+            m.put(key, new Measurement(value, std, unit));
+        }
     }
 
     /**
@@ -106,9 +183,9 @@ public final class Qualification {
     private static double worstStdErrorNear(SweepRecord sweep, List<Mode> modes) {
         double worst = 0.0;
         for (SweepPoint p : sweep.points()) {
-            for (Mode m : modes) {
-                double halfPowerHz = 2 * m.dampingRatio() * m.frequencyHz();
-                if (Math.abs(p.frequencyHz() - m.frequencyHz()) <= Math.max(halfPowerHz, 1e-3 * m.frequencyHz())) {
+            for (Mode mode : modes) {
+                double halfPowerHz = 2 * mode.dampingRatio() * mode.frequencyHz();
+                if (Math.abs(p.frequencyHz() - mode.frequencyHz()) <= Math.max(halfPowerHz, 1e-3 * mode.frequencyHz())) {
                     worst = Math.max(worst, p.relativeStdError());
                 }
             }

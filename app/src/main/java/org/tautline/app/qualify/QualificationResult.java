@@ -4,27 +4,39 @@ import java.util.List;
 import java.util.Optional;
 
 import org.tautline.analysis.frf.Frf;
+import org.tautline.analysis.modal.ModalEstimate;
+import org.tautline.analysis.specimen.HarmonicAssignment;
+import org.tautline.analysis.specimen.PatternFit;
+import org.tautline.analysis.specimen.Specimen;
+import org.tautline.analysis.specimen.TensionEstimate;
+import org.tautline.analysis.verdict.Measurement;
 import org.tautline.analysis.verdict.Verdict;
 import org.tautline.driver.sweep.SweepRecord;
 
 /**
- * Everything one qualification produced, from the sweep to the verdict.
+ * Everything one qualification produced, from the FRF to the verdict.
  *
  * @param specimen what was stated about the specimen
- * @param sweep the completed steps
+ * @param sweep the sweep the FRF came from, absent for an FRF read from a file
  * @param receptance the measured FRF as receptance, m/N
  * @param synthesized the fitted modal model at the same lines, m/N
- * @param modes fitted modes in frequency order, numbered where obvious
- * @param tension the tension estimate, absent when no fundamental was identified
+ * @param modal the modal fit (modes with standard errors, chart, quality)
+ * @param modes the fitted modes with harmonic numbers and polarisations, in frequency order
+ * @param harmonics the harmonic numbering, with the absent harmonics and why
+ * @param tension tension and bending stiffness from the harmonic series, absent when no harmonic was numbered
+ * @param participation measured against expected modal constants, absent with fewer than two harmonics
+ * @param measurements every figure the verdict may judge, by key
  * @param verdict the verdict against the specification
- * @param wallTimeS wall-clock time of sweep and analysis, s
+ * @param wallTimeS wall-clock time of the qualification, s
  */
-public record QualificationResult(SpecimenDescription specimen, SweepRecord sweep, Frf receptance, Frf synthesized,
-                                  List<IdentifiedMode> modes, Optional<TensionEstimate> tension, Verdict verdict,
-                                  double wallTimeS) {
+public record QualificationResult(Specimen specimen, Optional<SweepRecord> sweep, Frf receptance, Frf synthesized,
+                                  ModalEstimate modal, List<QualifiedMode> modes, HarmonicAssignment harmonics,
+                                  Optional<TensionEstimate> tension, Optional<PatternFit> participation,
+                                  java.util.Map<String, Measurement> measurements, Verdict verdict, double wallTimeS) {
 
-    /** Copies the mode list. */
+    /** Copies the collections. */
     public QualificationResult {
         modes = List.copyOf(modes);
+        measurements = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(measurements));
     }
 }

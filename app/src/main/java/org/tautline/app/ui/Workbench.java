@@ -187,7 +187,7 @@ public final class Workbench {
                 results.setText(ResultText.format(outcome));
                 results.setCaretPosition(0);
                 progress.setValue(1000);
-                progress.setString(outcome.result().sweep().completed() ? "done" : "stopped");
+                progress.setString(outcome.result().sweep().map(s -> s.completed()).orElse(true) ? "done" : "stopped");
             } catch (InterruptedException e) {
                 Thread.currentThread().interrupt();
             } catch (CancellationException e) {

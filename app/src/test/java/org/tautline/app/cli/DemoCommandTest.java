@@ -49,8 +49,8 @@ class DemoCommandTest {
         List<String> csv = Files.readAllLines(runDir.resolve("frf.csv"));
         assertEquals("# quantity: receptance", csv.get(0));
         assertEquals("# units: m/N", csv.get(1));
-        assertTrue(csv.contains("frequency_hz,real,imag,quality"), csv.subList(0, 6).toString());
-        assertEquals(root.get("steps").asInt(), csv.size() - csv.indexOf("frequency_hz,real,imag,quality") - 1,
+        assertTrue(csv.contains("frequency_hz,real,imag,quality,variance"), csv.subList(0, 6).toString());
+        assertEquals(root.get("steps").asInt(), csv.size() - csv.indexOf("frequency_hz,real,imag,quality,variance") - 1,
                 "one CSV line per sweep step");
         JsonNode truth = ResultJson.MAPPER.readTree(runDir.resolve("truth.json").toFile());
         assertEquals(root.get("truth"), truth);

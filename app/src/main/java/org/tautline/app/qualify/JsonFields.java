@@ -1,0 +1,91 @@
+package org.tautline.app.qualify;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+
+import com.fasterxml.jackson.core.JsonLocation;
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import org.tautline.analysis.AnalysisException;
+
+/** Reads a small JSON file and its fields with messages that name the file, the field and what was expected. */
+final class JsonFields {
+    private static final ObjectMapper MAPPER = new ObjectMapper();
+
+    private final String where;
+    private final JsonNode node;
+
+    private JsonFields(String where, JsonNode node) {
+        this.where = where;
+        this.node = node;
+    }
+
+    static JsonFields read(Path file, String what) throws IOException {
+        JsonNode root;
+        try {
+            root = MAPPER.readTree(Files.readString(file));
+        } catch (NoSuchFileException e) {
+            throw new AnalysisException(file + ": no such " + what + " file");
+        } catch (JsonProcessingException e) {
+            JsonLocation at = e.getLocation();
+            throw new AnalysisException(file + (at == null ? "" : ", line " + at.getLineNr() + ", column " + at.getColumnNr())
+                    + ": not valid JSON: " + e.getOriginalMessage());
+        }
+        if (root == null || !root.isObject()) {
+            throw new AnalysisException(file + ": expected a JSON object describing the " + what);
+        }
+        return new JsonFields(file.toString(), root);
+    }
+
+    String where() {
+        return where;
+    }
+
+    boolean has(String field) {
+        return node.has(field) && !node.get(field).isNull();
+    }
+
+    double number(String field) {
+        JsonNode value = node.get(field);
+        if (value == null || value.isNull()) {
+            throw new AnalysisException(where + ": field \"" + field + "\" is missing; expected a number");
+        }
+        if (!value.isNumber()) {
+            throw new AnalysisException(where + ": field \"" + field + "\" holds " + value + "; expected a number");
+        }
+        return value.asDouble();
+    }
+
+    double number(String field, double fallback) {
+        return has(field) ? number(field) : fallback;
+    }
+
+    String text(String field) {
+        JsonNode value = node.get(field);
+        if (value == null || value.isNull()) {
+            throw new AnalysisException(where + ": field \"" + field + "\" is missing; expected text");
+        }
+        if (!value.isTextual()) {
+            throw new AnalysisException(where + ": field \"" + field + "\" holds " + value + "; expected text");
+        }
+        return value.asText();
+    }
+
+    java.util.List<JsonFields> objects(String field) {
+        JsonNode value = node.get(field);
+        if (value == null || !value.isArray()) {
+            throw new AnalysisException(where + ": field \"" + field + "\" must be an array of objects");
+        }
+        java.util.List<JsonFields> out = new java.util.ArrayList<>();
+        for (int i = 0; i < value.size(); i++) {
+            if (!value.get(i).isObject()) {
+                throw new AnalysisException(where + ", " + field + "[" + i + "]: expected an object");
+            }
+            out.add(new JsonFields(where + ", " + field + "[" + i + "]", value.get(i)));
+        }
+        return out;
+    }
+}
