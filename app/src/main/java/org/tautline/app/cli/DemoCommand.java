@@ -12,6 +12,7 @@ import org.tautline.analysis.frf.FrfCsvWriter;
 import org.tautline.app.SafetyNotice;
 import org.tautline.app.qualify.DemoOutcome;
 import org.tautline.app.qualify.DemoRun;
+import org.tautline.app.qualify.DemoScenario;
 import org.tautline.app.qualify.ResultText;
 import org.tautline.driver.sweep.SweepListener;
 import picocli.CommandLine.Command;
@@ -30,7 +31,8 @@ final class DemoCommand implements Callable<Integer> {
     @Option(names = "--json", description = "Print the result as JSON on standard output (progress goes to standard error).")
     private boolean json;
 
-    @Option(names = "--out", paramLabel = "DIR", description = "Write frf.csv, truth.json and result.json into DIR.")
+    @Option(names = "--out", paramLabel = "DIR",
+            description = "Write frf.csv, truth.json, result.json, specimen.json and spec.json into DIR.")
     private Path outDir;
 
     @Option(names = "--no-progress", description = "Do not draw the progress bar.")
@@ -52,7 +54,7 @@ final class DemoCommand implements Callable<Integer> {
         out.flush();
         if (outDir != null) {
             write(outcome, outDir);
-            System.err.println("tautline: wrote frf.csv, truth.json and result.json to " + outDir);
+            System.err.println("tautline: wrote frf.csv, truth.json, result.json, specimen.json and spec.json to " + outDir);
         }
         return 0;
     }
@@ -65,5 +67,8 @@ final class DemoCommand implements Callable<Integer> {
         FrfCsvWriter.write(outcome.result().receptance(), metadata, dir.resolve("frf.csv"));
         ResultJson.MAPPER.writeValue(dir.resolve("truth.json").toFile(), ResultJson.truth(outcome.truth()));
         ResultJson.MAPPER.writeValue(dir.resolve("result.json").toFile(), ResultJson.outcome(outcome));
+        ResultJson.MAPPER.writeValue(dir.resolve("specimen.json").toFile(), ResultJson.specimenFile(DemoScenario.specimen()));
+        ResultJson.MAPPER.writeValue(dir.resolve("spec.json").toFile(),
+                ResultJson.specificationFile(DemoScenario.specification()));
     }
 }

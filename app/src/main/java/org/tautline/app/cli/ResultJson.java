@@ -90,7 +90,7 @@ final class ResultJson {
             root.put("sweepCompleted", sweep.completed());
         });
         root.put("wallTimeS", r.wallTimeS());
-        root.set("verdict", verdict(r.verdict()));
+        r.verdict().ifPresent(v -> root.set("verdict", verdict(v)));
         return root;
     }
 
@@ -199,6 +199,46 @@ final class ResultJson {
         }
         ArrayNode reasons = node.putArray("reasons");
         verdict.reasons().forEach(reasons::add);
+        return node;
+    }
+
+    /** A specimen in the specimen-file format that {@code SpecimenFile} reads. */
+    static ObjectNode specimenFile(Specimen s) {
+        ObjectNode node = MAPPER.createObjectNode();
+        node.put("id", s.id());
+        node.put("lengthM", s.lengthM());
+        node.put("ends", s.ends().name().toLowerCase(java.util.Locale.ROOT));
+        s.material().ifPresent(m -> node.put("material", m.name().toLowerCase(java.util.Locale.ROOT).replace('_', '-')));
+        node.put("linearDensityKgPerM", s.linearDensityKgPerM());
+        node.put("linearDensityStdKgPerM", s.linearDensityStdKgPerM());
+        node.put("bendingStiffnessNm2", s.bendingStiffnessNm2());
+        node.put("bendingStiffnessStdNm2", s.bendingStiffnessStdNm2());
+        node.put("forcingPositionM", s.forcingPositionM());
+        node.put("sensorPositionM", s.sensorPositionM());
+        node.put("nominalTensionN", s.nominalTensionN());
+        node.put("beltSpeedMPerS", s.beltSpeedMPerS());
+        node.put("sensorAngleDeg", Math.toDegrees(s.sensorAngleRad()));
+        node.put("axialStiffnessN", s.axialStiffnessN());
+        return node;
+    }
+
+    /** A specification in the format that {@code SpecificationFile} reads. */
+    static ObjectNode specificationFile(org.tautline.analysis.verdict.Specification spec) {
+        ObjectNode node = MAPPER.createObjectNode();
+        node.put("name", spec.name());
+        ArrayNode limits = node.putArray("limits");
+        for (org.tautline.analysis.verdict.Limit limit : spec.limits()) {
+            ObjectNode l = limits.addObject();
+            l.put("name", limit.name());
+            l.put("figure", limit.figureKey());
+            l.put("unit", limit.unit());
+            if (limit.hasLowerBound()) {
+                l.put("lower", limit.lowerBound());
+            }
+            if (limit.hasUpperBound()) {
+                l.put("upper", limit.upperBound());
+            }
+        }
         return node;
     }
 }

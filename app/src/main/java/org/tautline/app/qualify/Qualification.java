@@ -26,7 +26,6 @@ import org.tautline.analysis.specimen.TensionEstimator;
 import org.tautline.analysis.verdict.Measurement;
 import org.tautline.analysis.verdict.Specification;
 import org.tautline.analysis.verdict.Verdict;
-import org.tautline.driver.sweep.SweepPoint;
 import org.tautline.driver.sweep.SweepRecord;
 
 /**
@@ -38,7 +37,7 @@ import org.tautline.driver.sweep.SweepRecord;
  * pattern of modal constants. Every figure goes to the verdict with its standard uncertainty.
  * Figure keys: {@code f1Hz}, {@code tensionN}, {@code bendingStiffnessNm2}, {@code inharmonicityB},
  * {@code dampingRatio1}.. (per harmonic), {@code forcingPositionM}, {@code sensorPositionM},
- * {@code fitNormalisedResidual} and, after a sweep, {@code resonanceFrfRelativeStdError}.
+ * {@code fitNormalisedResidual} and, when the FRF carries its variance, {@code resonanceFrfRelativeStdError}.
  */
 public final class Qualification {
     /** Doublets: two polarisations of one harmonic lie within this relative split (a few half-power bandwidths). */
@@ -58,7 +57,8 @@ public final class Qualification {
      */
     public static QualificationResult analyse(Specimen specimen, SweepRecord sweep, Specification specification,
                                               long wallStartNs) {
-        return analyse(specimen, sweep.toFrf(), Optional.of(sweep), specification, wallStartNs);
+        return analyse(specimen, sweep.toFrf(), Optional.of(sweep), ModalEstimator.defaults(), Optional.of(specification),
+                wallStartNs);
     }
 
     /**
@@ -67,14 +67,16 @@ public final class Qualification {
      * @param specimen what was stated about the specimen
      * @param frf the measured FRF, any quantity
      * @param sweep the sweep it came from, if any
-     * @param specification the limits to judge against
+     * @param estimator the modal estimator (band, mode form)
+     * @param specification the limits to judge against, if any
      * @param wallStartNs {@link System#nanoTime()} when the qualification started
      * @return the result
      */
     public static QualificationResult analyse(Specimen specimen, Frf frf, Optional<SweepRecord> sweep,
-                                              Specification specification, long wallStartNs) {
+                                              ModalEstimator estimator, Optional<Specification> specification,
+                                              long wallStartNs) {
         Frf receptance = frf.toQuantity(FrfQuantity.RECEPTANCE);
-        ModalEstimate modal = ModalEstimator.defaults().estimate(receptance);
+        ModalEstimate modal = estimator.estimate(receptance);
         List<FittedMode> fitted = modal.modes();
         HarmonicAssignment harmonics = new HarmonicAssigner().withSplitTolerance(DOUBLET_SPLIT)
                 .assign(specimen, fitted, Double.NaN, modal.bandLowHz(), modal.bandHighHz());
@@ -94,8 +96,8 @@ public final class Qualification {
         } catch (AnalysisException e) {
             participation = Optional.empty();
         }
-        Map<String, Measurement> measured = measurements(modes, tension, participation, modal, sweep);
-        Verdict verdict = Verdict.evaluate(specification, measured);
+        Map<String, Measurement> measured = measurements(modes, tension, participation, modal, receptance);
+        Optional<Verdict> verdict = specification.map(spec -> Verdict.evaluate(spec, measured));
         Frf synthesized = ModalSynthesis.synthesize(modal.plainModes(), receptance.frequenciesHz(), FrfQuantity.RECEPTANCE);
         double wallS = (System.nanoTime() - wallStartNs) * 1e-9;
         return new QualificationResult(specimen, sweep, receptance, synthesized, modal, modes, harmonics, tension,
@@ -136,7 +138,7 @@ public final class Qualification {
 
     private static Map<String, Measurement> measurements(List<QualifiedMode> modes, Optional<TensionEstimate> tension,
                                                          Optional<PatternFit> participation, ModalEstimate modal,
-                                                         Optional<SweepRecord> sweep) {
+                                                         Frf receptance) {
         Map<String, Measurement> m = new LinkedHashMap<>();
         dominant(modes, 1).ifPresent(f1 -> putKnown(m, "f1Hz", f1.mode().frequencyHz(), f1.fitted().frequencyStdHz(), "Hz"));
         tension.ifPresent(t -> {
@@ -156,11 +158,9 @@ public final class Qualification {
             putKnown(m, "sensorPositionM", p.sensorPositionM(), p.sensorPositionStdM(), "m");
         });
         modal.quality().ifPresent(q -> m.put("fitNormalisedResidual", new Measurement(q.normalisedResidual(), 0, "")));
-        sweep.ifPresent(s -> {
-            if (!modes.isEmpty()) {
-                m.put("resonanceFrfRelativeStdError", new Measurement(worstStdErrorNear(s, modal.plainModes()), 0, ""));
-            }
-        });
+        if (!modes.isEmpty() && receptance.variance().isPresent()) {
+            m.put("resonanceFrfRelativeStdError", new Measurement(worstStdErrorNear(receptance, modal.plainModes()), 0, ""));
+        }
         return m;
     }
 
@@ -175,18 +175,20 @@ public final class Qualification {
     }
 
     /**
-     * The worst relative standard error of |H| among steps within a half-power bandwidth of a
-     * fitted mode, where the modal estimate draws its information. At resonance the force drops
-     * (the specimen's drive-point receptance is large), so this is where the force channel's noise
-     * matters most.
+     * The worst relative standard error of |H| among lines within a half-power bandwidth of a fitted
+     * mode, where the modal estimate draws its information: sqrt(variance/2)/|H| (half of the complex
+     * variance falls on the magnitude). At resonance the force drops (the specimen's drive-point
+     * receptance is large), so this is where the force channel's noise matters most.
      */
-    private static double worstStdErrorNear(SweepRecord sweep, List<Mode> modes) {
+    private static double worstStdErrorNear(Frf receptance, List<Mode> modes) {
+        double[] variance = receptance.variance().orElseThrow();
         double worst = 0.0;
-        for (SweepPoint p : sweep.points()) {
+        for (int i = 0; i < receptance.size(); i++) {
+            double f = receptance.frequencyHz(i);
             for (Mode mode : modes) {
                 double halfPowerHz = 2 * mode.dampingRatio() * mode.frequencyHz();
-                if (Math.abs(p.frequencyHz() - mode.frequencyHz()) <= Math.max(halfPowerHz, 1e-3 * mode.frequencyHz())) {
-                    worst = Math.max(worst, p.relativeStdError());
+                if (Math.abs(f - mode.frequencyHz()) <= Math.max(halfPowerHz, 1e-3 * mode.frequencyHz())) {
+                    worst = Math.max(worst, Math.sqrt(variance[i] / 2) / receptance.magnitude(i));
                 }
             }
         }

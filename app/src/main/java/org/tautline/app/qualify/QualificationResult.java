@@ -26,13 +26,14 @@ import org.tautline.driver.sweep.SweepRecord;
  * @param tension tension and bending stiffness from the harmonic series, absent when no harmonic was numbered
  * @param participation measured against expected modal constants, absent with fewer than two harmonics
  * @param measurements every figure the verdict may judge, by key
- * @param verdict the verdict against the specification
+ * @param verdict the verdict against the specification, absent when no specification was given
  * @param wallTimeS wall-clock time of the qualification, s
  */
 public record QualificationResult(Specimen specimen, Optional<SweepRecord> sweep, Frf receptance, Frf synthesized,
                                   ModalEstimate modal, List<QualifiedMode> modes, HarmonicAssignment harmonics,
                                   Optional<TensionEstimate> tension, Optional<PatternFit> participation,
-                                  java.util.Map<String, Measurement> measurements, Verdict verdict, double wallTimeS) {
+                                  java.util.Map<String, Measurement> measurements, Optional<Verdict> verdict,
+                                  double wallTimeS) {
 
     /** Copies the collections. */
     public QualificationResult {

@@ -50,10 +50,12 @@ public final class ResultText {
         }
         r.modal().warnings().forEach(w -> out.append("  note: ").append(w).append('\n'));
         appendProperties(out, r, truth);
-        out.append(String.format(Locale.ROOT, "%nVerdict: %s%n", r.verdict().outcome()));
-        for (LimitResult limit : r.verdict().results()) {
-            out.append("  ").append(limit.outcome()).append(": ").append(limit.reason()).append('\n');
-        }
+        r.verdict().ifPresent(verdict -> {
+            out.append(String.format(Locale.ROOT, "%nVerdict: %s%n", verdict.outcome()));
+            for (LimitResult limit : verdict.results()) {
+                out.append("  ").append(limit.outcome()).append(": ").append(limit.reason()).append('\n');
+            }
+        });
         r.sweep().ifPresent(sweep -> out.append(String.format(Locale.ROOT, "%nRig time %.1f s, wall time %.1f s, %d steps%s%n",
                 sweep.rigTimeS(), r.wallTimeS(), sweep.points().size(), sweep.completed() ? "" : " (stopped before the end)")));
         return out.toString();

@@ -15,6 +15,7 @@ import org.tautline.analysis.specimen.PatternFit;
 import org.tautline.analysis.specimen.Specimen;
 import org.tautline.analysis.specimen.TensionEstimate;
 import org.tautline.analysis.verdict.Outcome;
+import org.tautline.analysis.verdict.Verdict;
 import org.tautline.driver.sim.SimulatedSpecimen;
 import org.tautline.driver.sim.TrueMode;
 import org.tautline.driver.sweep.SweepListener;
@@ -86,8 +87,9 @@ class DemoQualificationTest {
 
     @Test
     void passesTheDemoSpecification() {
-        assertEquals(Outcome.PASS, outcome.result().verdict().outcome(), outcome.result().verdict().reasons().toString());
-        assertEquals(6, outcome.result().verdict().results().size());
+        Verdict verdict = outcome.result().verdict().orElseThrow();
+        assertEquals(Outcome.PASS, verdict.outcome(), verdict.reasons().toString());
+        assertEquals(6, verdict.results().size());
     }
 
     @Test

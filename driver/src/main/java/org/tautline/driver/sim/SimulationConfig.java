@@ -1,5 +1,6 @@
 package org.tautline.driver.sim;
 
+import org.tautline.analysis.specimen.StringPhysics;
 import org.tautline.driver.RigException;
 
 /**
@@ -19,6 +20,13 @@ public record SimulationConfig(SimulatedSpecimen specimen, ShakerModel shaker, S
     /** Default acquisition sample rate, Hz. */
     public static final double DEFAULT_SAMPLE_RATE_HZ = 20000.0;
 
+    /**
+     * Every simulated mode must lie below this fraction of the sample rate: the stinger coupling is
+     * solved once per sample, which needs each mode resolved in time (common practice for
+     * time-stepping: several steps per period of the fastest mode).
+     */
+    public static final double NYQUIST_FRACTION = 0.4;
+
     /** Checks the fields and that both transducers sit strictly inside the span. */
     public SimulationConfig {
         Checks.present(WHERE, "specimen", specimen);
@@ -29,6 +37,15 @@ public record SimulationConfig(SimulatedSpecimen specimen, ShakerModel shaker, S
         double lengthM = specimen.lengthM();
         requireInside("sensors.forcingPositionM", sensors.forcingPositionM(), lengthM);
         requireInside("sensors.sensorPositionM", sensors.sensorPositionM(), lengthM);
+        double f0 = StringPhysics.mersenneFundamentalHz(lengthM, specimen.tensionN(), specimen.linearDensityKgPerM());
+        double b = StringPhysics.inharmonicity(specimen.bendingStiffnessNm2(), specimen.tensionN(), lengthM);
+        double highestHz = StringPhysics.stiffStringFrequencyHz(specimen.modeCount(), f0, b, specimen.ends())
+                * (1 + specimen.polarisationSplit());
+        if (!(highestHz < NYQUIST_FRACTION * sampleRateHz)) {
+            throw new RigException(WHERE + ": the highest simulated mode (harmonic " + specimen.modeCount() + ", "
+                    + Math.round(highestHz) + " Hz) must lie below " + NYQUIST_FRACTION + " of the sample rate ("
+                    + Math.round(NYQUIST_FRACTION * sampleRateHz) + " Hz); simulate fewer modes or sample faster");
+        }
         if (sensors.accelerometerMassKg() > 0
                 && Math.abs(sensors.sensorPositionM() - sensors.forcingPositionM()) < 1e-6 * lengthM) {
             throw new RigException(WHERE + ": an accelerometer with mass cannot sit on the stinger at "

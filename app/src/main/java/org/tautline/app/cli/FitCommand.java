@@ -1,0 +1,131 @@
+package org.tautline.app.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.concurrent.Callable;
+
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import org.tautline.analysis.AnalysisException;
+import org.tautline.analysis.frf.Frf;
+import org.tautline.analysis.frf.FrfCsvReader;
+import org.tautline.analysis.modal.FittedMode;
+import org.tautline.analysis.modal.ModalEstimate;
+import org.tautline.analysis.modal.ModalEstimator;
+import org.tautline.analysis.modal.Mode;
+import org.tautline.analysis.specimen.Specimen;
+import org.tautline.analysis.verdict.Specification;
+import org.tautline.app.qualify.Qualification;
+import org.tautline.app.qualify.QualificationResult;
+import org.tautline.app.qualify.ResultText;
+import org.tautline.app.qualify.SpecificationFile;
+import org.tautline.app.qualify.SpecimenFile;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code tautline fit}: the modal model of an FRF file, and with a specimen its physics and verdict. */
+@Command(name = "fit", mixinStandardHelpOptions = true,
+        description = "Fit a damped modal model to an FRF CSV file (poles by LSCF with automatic mode choice, modal"
+                + " constants by LSFD, joint refinement with standard errors). With --specimen, also number the"
+                + " harmonics and read tension, bending stiffness and positions; with --spec, judge them.")
+final class FitCommand implements Callable<Integer> {
+    @Spec
+    private CommandSpec spec;
+
+    @Option(names = "--frf", required = true, paramLabel = "FRF.csv", description = "The FRF to fit (FRF CSV).")
+    private Path frfFile;
+
+    @Option(names = "--band", paramLabel = "F1:F2", description = "Fit only between F1 and F2 Hz.")
+    private String band;
+
+    @Option(names = "--complex-modes", description = "Fit complex modal constants (non-proportional damping).")
+    private boolean complexModes;
+
+    @Option(names = "--specimen", paramLabel = "S.json", description = "The specimen description (see the README).")
+    private Path specimenFile;
+
+    @Option(names = "--spec", paramLabel = "SPEC.json", description = "The specification to judge against (needs --specimen).")
+    private Path specificationFile;
+
+    @Option(names = "--json", description = "Print the result as JSON.")
+    private boolean json;
+
+    @Override
+    public Integer call() throws IOException {
+        Frf frf = FrfCsvReader.read(frfFile).frf();
+        ModalEstimator estimator = ModalEstimator.defaults().withComplexModes(complexModes);
+        if (band != null) {
+            double[] limits = parseBand(band);
+            estimator = estimator.withBand(limits[0], limits[1]);
+        }
+        if (specificationFile != null && specimenFile == null) {
+            throw new AnalysisException("--spec needs --specimen: the limits judge the specimen's properties");
+        }
+        PrintWriter out = spec.commandLine().getOut();
+        if (specimenFile == null) {
+            ModalEstimate estimate = estimator.estimate(frf);
+            out.print(json ? ResultJson.MAPPER.writeValueAsString(modalJson(estimate)) + "\n" : modalText(estimate));
+        } else {
+            Specimen specimen = SpecimenFile.read(specimenFile);
+            Optional<Specification> specification = specificationFile == null ? Optional.empty()
+                    : Optional.of(SpecificationFile.read(specificationFile));
+            QualificationResult result = Qualification.analyse(specimen, frf, Optional.empty(), estimator, specification,
+                    System.nanoTime());
+            out.print(json ? ResultJson.MAPPER.writeValueAsString(ResultJson.result(result)) + "\n"
+                    : ResultText.format(result, Optional.empty()));
+        }
+        out.flush();
+        return 0;
+    }
+
+    static double[] parseBand(String text) {
+        String[] parts = text.split(":");
+        try {
+            if (parts.length == 2) {
+                double low = Double.parseDouble(parts[0].strip());
+                double high = Double.parseDouble(parts[1].strip());
+                if (low >= 0 && high > low) {
+                    return new double[] {low, high};
+                }
+            }
+        } catch (NumberFormatException e) {
+            // reported below
+        }
+        throw new AnalysisException("--band '" + text + "': expected F1:F2 in Hz with 0 <= F1 < F2, for example 150:1500");
+    }
+
+    private static ObjectNode modalJson(ModalEstimate estimate) {
+        ObjectNode root = ResultJson.MAPPER.createObjectNode();
+        ArrayNode modes = root.putArray("modes");
+        for (FittedMode m : estimate.modes()) {
+            modes.add(ResultJson.fittedMode(m));
+        }
+        ResultJson.modal(root, estimate);
+        return root;
+    }
+
+    private static String modalText(ModalEstimate estimate) {
+        StringBuilder out = new StringBuilder(String.format(Locale.ROOT, "Modes in %.4g .. %.4g Hz%n", estimate.bandLowHz(),
+                estimate.bandHighHz()));
+        out.append(String.format(Locale.ROOT, "%12s %10s %10s %10s %12s %12s%n", "f (Hz)", "+/-", "zeta", "+/-", "A re (1/kg)",
+                "A im (1/kg)"));
+        for (FittedMode f : estimate.modes()) {
+            Mode m = f.mode();
+            out.append(String.format(Locale.ROOT, "%12.4f %10.4f %10.6f %10.6f %12.5g %12.5g%n", m.frequencyHz(),
+                    f.frequencyStdHz(), m.dampingRatio(), f.dampingRatioStd(), m.modalConstant().getReal(),
+                    m.modalConstant().getImaginary()));
+        }
+        if (estimate.modes().isEmpty()) {
+            out.append("  no mode found in the band\n");
+        }
+        estimate.quality().ifPresent(q -> out.append(String.format(Locale.ROOT,
+                "Fit: normalised residual %.4g, correlation %.6f%n", q.normalisedResidual(), q.correlation())));
+        estimate.warnings().forEach(w -> out.append("note: ").append(w).append('\n'));
+        return out.toString();
+    }
+}
