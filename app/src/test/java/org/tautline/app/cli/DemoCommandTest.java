@@ -56,5 +56,34 @@ class DemoCommandTest {
         assertEquals(root.get("truth"), truth);
         JsonNode result = ResultJson.MAPPER.readTree(runDir.resolve("result.json").toFile());
         assertEquals(root.get("modes"), result.get("modes"));
+
+        // The same analysis from the files the demo wrote gives the same modes, properties and verdict.
+        CliRun fit = CliRun.of("fit", "--frf", runDir.resolve("frf.csv").toString(), "--specimen",
+                runDir.resolve("specimen.json").toString(), "--spec", runDir.resolve("spec.json").toString(), "--json");
+        assertEquals(0, fit.exitCode(), fit.err());
+        JsonNode fitted = ResultJson.MAPPER.readTree(fit.out());
+        assertEquals(root.get("modes").size(), fitted.get("modes").size());
+        for (int i = 0; i < fitted.get("modes").size(); i++) {
+            assertEquals(root.get("modes").get(i).get("frequencyHz").asDouble(),
+                    fitted.get("modes").get(i).get("frequencyHz").asDouble(), 0.0, "mode " + i);
+            assertTrue(fitted.get("modes").get(i).get("frequencyStdHz").isNumber());
+            assertTrue(fitted.get("modes").get(i).get("harmonic").asInt() > 0);
+        }
+        assertEquals(root.get("properties").get("tensionN"), fitted.get("properties").get("tensionN"));
+        assertEquals("PASS", fitted.get("verdict").get("outcome").asText());
+        assertTrue(fitted.get("residuals").get("upper").has("re"));
+        assertTrue(fitted.get("quality").get("normalisedResidual").asDouble() < 0.1);
+    }
+
+    @Test
+    void fitNeedsASpecimenToJudgeAgainstASpecification(@TempDir Path dir) throws Exception {
+        Path frf = dir.resolve("f.csv");
+        Files.writeString(frf, "# quantity: receptance\nfrequency_hz,real,imag\n1,1,0\n");
+        CliRun r = CliRun.of("fit", "--frf", frf.toString(), "--spec", dir.resolve("spec.json").toString());
+        assertEquals(1, r.exitCode());
+        assertEquals("tautline: --spec needs --specimen: the limits judge the specimen's properties", r.err().strip());
+        CliRun band = CliRun.of("fit", "--frf", frf.toString(), "--band", "500-100");
+        assertEquals("tautline: --band '500-100': expected F1:F2 in Hz with 0 <= F1 < F2, for example 150:1500",
+                band.err().strip());
     }
 }
