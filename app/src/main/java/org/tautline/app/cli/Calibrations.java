@@ -1,19 +1,15 @@
 package org.tautline.app.cli;
 
 import java.io.IOException;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
-import com.fasterxml.jackson.core.JsonLocation;
-import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.databind.JsonNode;
 import org.tautline.analysis.AnalysisException;
 import org.tautline.analysis.frf.ChannelCalibration;
 import org.tautline.analysis.frf.ChannelCalibration.Quantity;
+import org.tautline.app.qualify.JsonFields;
 
 /**
  * Channel calibrations from the command line ({@code CH=SENSITIVITY,UNIT}) or a small JSON file.
@@ -72,43 +68,19 @@ final class Calibrations {
      * @throws IOException when the file cannot be read
      */
     static List<ChannelCalibration> readFile(Path file) throws IOException {
-        JsonNode root;
-        try {
-            root = ResultJson.MAPPER.readTree(Files.readString(file));
-        } catch (NoSuchFileException e) {
-            throw new AnalysisException(file + ": no such calibration file");
-        } catch (JsonProcessingException e) {
-            JsonLocation at = e.getLocation();
-            throw new AnalysisException(file + (at == null ? "" : ", line " + at.getLineNr() + ", column " + at.getColumnNr())
-                    + ": not valid JSON: " + e.getOriginalMessage());
-        }
-        if (root == null || !root.isObject() || !root.path("channels").isArray()) {
-            throw new AnalysisException(file + ": expected an object with a \"channels\" array of calibrations");
-        }
         List<ChannelCalibration> result = new ArrayList<>();
-        int index = 0;
-        for (JsonNode entry : root.get("channels")) {
-            String where = file + ", channels[" + index + "]";
-            JsonNode channel = entry.path("channel");
-            JsonNode sensitivity = entry.path("sensitivityVoltsPerUnit");
-            if (!channel.isTextual() && !channel.isInt()) {
-                throw new AnalysisException(where + ": \"channel\" must be a channel name or a 0-based index");
-            }
-            if (!sensitivity.isNumber()) {
-                throw new AnalysisException(where + ": \"sensitivityVoltsPerUnit\" must be a number of volts per unit");
-            }
-            if (!entry.path("quantity").isTextual()) {
-                throw new AnalysisException(where + ": \"quantity\" must be force, displacement, velocity, acceleration"
-                        + " or voltage");
-            }
+        for (JsonFields entry : JsonFields.read(file, "calibration").objects("channels")) {
+            String channel = entry.textOrIndex("channel");
+            double sensitivity = entry.number("sensitivityVoltsPerUnit");
+            Quantity quantity;
             try {
-                Quantity quantity = Quantity.of(entry.get("quantity").asText());
-                String unit = entry.path("unit").isTextual() ? entry.get("unit").asText() : quantity.siUnit();
-                result.add(new ChannelCalibration(channel.asText(), sensitivity.asDouble(), unit, quantity));
+                quantity = Quantity.of(entry.text("quantity"));
+                String unit = entry.has("unit") ? entry.text("unit") : quantity.siUnit();
+                result.add(new ChannelCalibration(channel, sensitivity, unit, quantity));
             } catch (AnalysisException e) {
-                throw new AnalysisException(where + ": " + e.getMessage(), e);
+                throw e.getMessage().startsWith(entry.where()) ? e
+                        : new AnalysisException(entry.where() + ": " + e.getMessage(), e);
             }
-            index++;
         }
         return result;
     }

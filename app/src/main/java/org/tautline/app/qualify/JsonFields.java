@@ -12,7 +12,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import org.tautline.analysis.AnalysisException;
 
 /** Reads a small JSON file and its fields with messages that name the file, the field and what was expected. */
-final class JsonFields {
+public final class JsonFields {
     private static final ObjectMapper MAPPER = new ObjectMapper();
 
     private final String where;
@@ -23,7 +23,15 @@ final class JsonFields {
         this.node = node;
     }
 
-    static JsonFields read(Path file, String what) throws IOException {
+    /**
+     * Reads a file that must hold one JSON object.
+     *
+     * @param file the file
+     * @param what what it describes, for messages ("specimen")
+     * @return its fields
+     * @throws IOException when the file cannot be read
+     */
+    public static JsonFields read(Path file, String what) throws IOException {
         JsonNode root;
         try {
             root = MAPPER.readTree(Files.readString(file));
@@ -40,15 +48,15 @@ final class JsonFields {
         return new JsonFields(file.toString(), root);
     }
 
-    String where() {
+    public String where() {
         return where;
     }
 
-    boolean has(String field) {
+    public boolean has(String field) {
         return node.has(field) && !node.get(field).isNull();
     }
 
-    double number(String field) {
+    public double number(String field) {
         JsonNode value = node.get(field);
         if (value == null || value.isNull()) {
             throw new AnalysisException(where + ": field \"" + field + "\" is missing; expected a number");
@@ -59,11 +67,11 @@ final class JsonFields {
         return value.asDouble();
     }
 
-    double number(String field, double fallback) {
+    public double number(String field, double fallback) {
         return has(field) ? number(field) : fallback;
     }
 
-    String text(String field) {
+    public String text(String field) {
         JsonNode value = node.get(field);
         if (value == null || value.isNull()) {
             throw new AnalysisException(where + ": field \"" + field + "\" is missing; expected text");
@@ -74,7 +82,27 @@ final class JsonFields {
         return value.asText();
     }
 
-    java.util.List<JsonFields> objects(String field) {
+    /**
+     * A field that names something either by text or by a whole number (a channel name or index).
+     *
+     * @param field the field
+     * @return its text, or the number as text
+     */
+    public String textOrIndex(String field) {
+        JsonNode value = node.get(field);
+        if (value == null || !(value.isTextual() || value.isInt())) {
+            throw new AnalysisException(where + ": field \"" + field + "\" must be a name or a 0-based index");
+        }
+        return value.asText();
+    }
+
+    /**
+     * The objects of an array field, each named by its place for messages.
+     *
+     * @param field the field
+     * @return the objects, in order
+     */
+    public java.util.List<JsonFields> objects(String field) {
         JsonNode value = node.get(field);
         if (value == null || !value.isArray()) {
             throw new AnalysisException(where + ": field \"" + field + "\" must be an array of objects");
