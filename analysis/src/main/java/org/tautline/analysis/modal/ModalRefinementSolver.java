@@ -5,9 +5,9 @@ package org.tautline.analysis.modal;
  *
  * <p>Each step minimises ||J d - r||^2 + lambda sum_j ||J_j||^2 d_j^2, Marquardt's damping scaled by the column
  * norms of J (D. W. Marquardt, "An algorithm for least-squares estimation of nonlinear parameters", SIAM J. Appl.
- * Math. 11:431-441, 1963, from memory), by appending the p damping rows to the 2m columns of J and solving the
- * stacked system with {@link LsfdLeastSquares} (Householder QR on columns, no normal equations, so close modes keep
- * their accuracy). lambda falls tenfold after a step that lowers the cost and rises tenfold after one that does
+ * Math. 11:431-441, 1963, from memory). J and r are reduced once per iteration by Householder QR to the p x p
+ * triangle R and Q^T r ({@link LsfdLeastSquares#reduce}); each trial lambda then solves only the 2p x p system of R
+ * stacked on the damping rows. No normal equations are formed, so close modes keep their accuracy. lambda falls tenfold after a step that lowers the cost and rises tenfold after one that does
  * not. The minimiser stops when an accepted step lowers the cost by less than {@link #RELATIVE_COST} of it or
  * moves no scaled parameter by more than {@link #STEP}. The model works on columns throughout, which keeps the
  * 8000 x 34 Jacobian of a 10-mode fit of 4000 lines in cache-friendly arrays; this replaced a general-purpose
@@ -52,20 +52,19 @@ final class ModalRefinementSolver {
         double cost = cost(target, values);
         double lambda = START_DAMPING;
         int iterations = 1;
+        double[][] reduced = reduced(columns, target, values);
         while (true) {
-            double[] residual = new double[rows + p];
-            for (int i = 0; i < rows; i++) {
-                residual[i] = target[i] - values[i];
-            }
-            double[][] damped = new double[p][rows + p];
+            double[][] damped = new double[p][2 * p];
             for (int j = 0; j < p; j++) {
-                System.arraycopy(columns[j], 0, damped[j], 0, rows);
+                System.arraycopy(reduced[j], 0, damped[j], 0, p);
                 double norm = 0;
-                for (int i = 0; i < rows; i++) {
-                    norm += columns[j][i] * columns[j][i];
+                for (int i = 0; i < p; i++) {
+                    norm += reduced[j][i] * reduced[j][i];
                 }
-                damped[j][rows + j] = Math.sqrt(lambda * norm);
+                damped[j][p + j] = Math.sqrt(lambda * norm);
             }
+            double[] residual = new double[2 * p];
+            System.arraycopy(reduced[p], 0, residual, 0, p);
             LsfdLeastSquares step = LsfdLeastSquares.solve(damped, residual);
             double[] d = step.solution();
             double largest = 0;
@@ -91,7 +90,7 @@ final class ModalRefinementSolver {
                     if (iterations >= maxIterations) {
                         return new Outcome(point, cost, iterations, false);
                     }
-                    columns = model.jacobianColumns(point, values);
+                    reduced = reduced(model.jacobianColumns(point, values), target, values);
                     iterations++;
                     continue;
                 }
@@ -104,6 +103,15 @@ final class ModalRefinementSolver {
                 return new Outcome(point, cost, iterations, true);
             }
         }
+    }
+
+    /** R and Q^T r of the Jacobian and the residual r = target - values, see {@link LsfdLeastSquares#reduce}. */
+    private static double[][] reduced(double[][] columns, double[] target, double[] values) {
+        double[] residual = new double[target.length];
+        for (int i = 0; i < target.length; i++) {
+            residual[i] = target[i] - values[i];
+        }
+        return LsfdLeastSquares.reduce(columns, residual);
     }
 
     private static double cost(double[] target, double[] values) {
