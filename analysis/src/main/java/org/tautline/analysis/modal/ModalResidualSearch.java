@@ -31,7 +31,7 @@ final class ModalResidualSearch {
     /** Window sum of |e_k|^2 (and drop in refined cost) that marks a missed mode. */
     static final double THRESHOLD = 30;
     /** Most modes added to one fit. */
-    static final int MAX_ADDED = 4;
+    static final int MAX_ADDED = 10;
 
     /**
      * The outcome of a search.
