@@ -42,38 +42,8 @@ final class LsfdLeastSquares {
         int p = columns.length;
         int m = columns[0].length;
         double[] scale = new double[p];
-        for (int j = 0; j < p; j++) {
-            double norm = norm(columns[j], 0);
-            scale[j] = norm > 0 ? norm : 1;
-            for (int i = 0; i < m; i++) {
-                columns[j][i] /= scale[j];
-            }
-        }
         double[] b = rhs == null ? new double[m] : rhs.clone();
-        double[][] r = new double[p][p];
-        for (int k = 0; k < p; k++) {
-            double[] v = columns[k];
-            double alpha = norm(v, k);
-            if (v[k] > 0) {
-                alpha = -alpha;
-            }
-            double vk = v[k] - alpha;
-            double vnorm2 = vk * vk;
-            for (int i = k + 1; i < m; i++) {
-                vnorm2 += v[i] * v[i];
-            }
-            v[k] = vk;
-            if (vnorm2 > 0) {
-                for (int j = k + 1; j < p; j++) {
-                    reflect(v, columns[j], k, vnorm2);
-                }
-                reflect(v, b, k, vnorm2);
-            }
-            r[k][k] = alpha;
-            for (int j = k + 1; j < p; j++) {
-                r[k][j] = columns[j][k];
-            }
-        }
+        double[][] r = triangularise(columns, b, scale);
         double residual = 0;
         for (int i = p; i < m; i++) {
             residual += b[i] * b[i];
@@ -111,6 +81,69 @@ final class LsfdLeastSquares {
             }
         }
         return new LsfdLeastSquares(x, inverse, condition, residual);
+    }
+
+    /**
+     * Reduces min ||A x - b|| to the equivalent p x p problem min ||R x - c||, R upper triangular.
+     *
+     * <p>||A x - b||^2 = ||R x - c||^2 + (the part of b outside the range of A), so any problem that adds rows to
+     * A (a damping term, say) can be solved on R and c alone.
+     *
+     * @param columns p columns of length m (m at least p), overwritten
+     * @param rhs the m right-hand side values (not changed)
+     * @return p + 1 columns of length p: the columns of R, then c
+     */
+    static double[][] reduce(double[][] columns, double[] rhs) {
+        int p = columns.length;
+        double[] scale = new double[p];
+        double[] b = rhs.clone();
+        double[][] r = triangularise(columns, b, scale);
+        double[][] out = new double[p + 1][p];
+        for (int j = 0; j < p; j++) {
+            for (int i = 0; i <= j; i++) {
+                out[j][i] = r[i][j] * scale[j];
+            }
+        }
+        System.arraycopy(b, 0, out[p], 0, p);
+        return out;
+    }
+
+    /** Householder QR of the column-scaled A in place: fills scale, applies Q^T to b, returns R by rows. */
+    private static double[][] triangularise(double[][] columns, double[] b, double[] scale) {
+        int p = columns.length;
+        int m = columns[0].length;
+        for (int j = 0; j < p; j++) {
+            double norm = norm(columns[j], 0);
+            scale[j] = norm > 0 ? norm : 1;
+            for (int i = 0; i < m; i++) {
+                columns[j][i] /= scale[j];
+            }
+        }
+        double[][] r = new double[p][p];
+        for (int k = 0; k < p; k++) {
+            double[] v = columns[k];
+            double alpha = norm(v, k);
+            if (v[k] > 0) {
+                alpha = -alpha;
+            }
+            double vk = v[k] - alpha;
+            double vnorm2 = vk * vk;
+            for (int i = k + 1; i < m; i++) {
+                vnorm2 += v[i] * v[i];
+            }
+            v[k] = vk;
+            if (vnorm2 > 0) {
+                for (int j = k + 1; j < p; j++) {
+                    reflect(v, columns[j], k, vnorm2);
+                }
+                reflect(v, b, k, vnorm2);
+            }
+            r[k][k] = alpha;
+            for (int j = k + 1; j < p; j++) {
+                r[k][j] = columns[j][k];
+            }
+        }
+        return r;
     }
 
     private static void reflect(double[] v, double[] target, int k, double vnorm2) {

@@ -120,6 +120,16 @@ public final class ModalEstimator {
         ResidualTerms residualsStd;
         try {
             ModalRefinementResult refined = ModalRefinement.refine(h, start.modes(), start.residualTerms(), refine);
+            if (weighted) {
+                ModalResidualSearch.Outcome found = ModalResidualSearch.search(h, low, high, refined, refine);
+                refined = found.refined();
+                for (Pole p : found.added()) {
+                    selection = selection.withFoundInResidual(p);
+                    warnings.add(String.format(java.util.Locale.ROOT, "a mode near %.4g Hz was missed by the "
+                            + "stabilisation chart and added because the fit left a residual far above the noise there",
+                            p.frequencyHz()));
+                }
+            }
             modes = refined.modes();
             residuals = refined.residualTerms();
             residualsStd = refined.residualTermsStd();

@@ -2,12 +2,6 @@ package org.tautline.analysis.modal;
 
 import java.util.List;
 
-import org.hipparchus.exception.LocalizedCoreFormats;
-import org.hipparchus.exception.MathIllegalStateException;
-import org.hipparchus.linear.ArrayRealVector;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresBuilder;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresOptimizer;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.LevenbergMarquardtOptimizer;
 import org.tautline.analysis.AnalysisException;
 import org.tautline.analysis.frf.Frf;
 
@@ -15,9 +9,8 @@ import org.tautline.analysis.frf.Frf;
  * Nonlinear least-squares refinement of every pole, modal constant and residual term of a modal model together.
  *
  * <p>The weighted sum sum_k w_k |H_k - H_model(w_k)|^2 of the receptance is minimised by Levenberg-Marquardt
- * (J. J. More, "The Levenberg-Marquardt algorithm: implementation and theory", Numerical Analysis, Springer
- * LNM 630, 1978, from memory; as implemented by Hipparchus 4.0.2) with the analytic Jacobian of
- * {@code ModalRefinementModel} in scaled parameters. With w_k = 1/variance this is the frequency-domain
+ * (see {@code ModalRefinementSolver}) with the analytic Jacobian of {@code ModalRefinementModel} in scaled
+ * parameters. With w_k = 1/variance this is the frequency-domain
  * maximum-likelihood estimator for circular complex Gaussian noise (R. Pintelon and J. Schoukens, System
  * Identification: A Frequency Domain Approach, 2nd ed., Wiley-IEEE Press, 2012, from memory).
  *
@@ -76,32 +69,20 @@ public final class ModalRefinement {
         }
         ModalRefinementModel model = new ModalRefinementModel(w, weight, start, startResidualTerms, o.realModes(),
                 o.upperResidual(), o.lowerResidual(), lines.peakMagnitude());
-        LeastSquaresBuilder builder = new LeastSquaresBuilder()
-                .start(new ArrayRealVector(model.start(), false))
-                .target(target)
-                .model(model::evaluate)
-                .lazyEvaluation(false)
-                .maxIterations(options.maxIterations())
-                .maxEvaluations(10 * options.maxIterations() + 10);
-        LeastSquaresOptimizer.Optimum optimum;
-        try {
-            optimum = new LevenbergMarquardtOptimizer().optimize(builder.build());
-        } catch (MathIllegalStateException e) {
-            if (e.getSpecifier() == LocalizedCoreFormats.MAX_COUNT_EXCEEDED) {
-                throw new AnalysisException(WHAT + " did not converge within " + options.maxIterations() + " iterations ("
-                        + start.size() + " modes, " + m + " lines); start closer (LSFD with poles from the stabilisation "
-                        + "chart) or raise maxIterations", e);
-            }
-            throw new AnalysisException(WHAT + " stopped: " + e.getMessage(), e);
+        ModalRefinementSolver.Outcome optimum = ModalRefinementSolver.minimise(model, target, options.maxIterations());
+        if (!optimum.converged()) {
+            throw new AnalysisException(WHAT + " did not converge within " + options.maxIterations() + " iterations ("
+                    + start.size() + " modes, " + m + " lines); start closer (LSFD with poles from the stabilisation "
+                    + "chart) or raise maxIterations");
         }
-        double[] point = optimum.getPoint().toArray();
+        double[] point = optimum.point();
         for (int r = 0; r < start.size(); r++) {
             if (!(model.angularFrequency(point, r) > 0)) {
                 throw new AnalysisException(WHAT + " drove mode " + r + " (start " + start.get(r).frequencyHz()
                         + " Hz) to a non-positive frequency; the start is too far from the data");
             }
         }
-        double chiSquare = optimum.getChiSquare();
+        double chiSquare = optimum.cost();
         double perComponent = chiSquare / (2 * m - p);
         double scale = lines.absolute() ? 0.5 : perComponent;
         double[][] columns = model.jacobianColumns(point, null);
@@ -118,7 +99,7 @@ public final class ModalRefinement {
             }
         }
         return new ModalRefinementResult(model.fittedModes(point, covariance), model.residualTerms(point, null),
-                model.residualTerms(point, covariance), optimum.getIterations(), chiSquare,
+                model.residualTerms(point, covariance), optimum.iterations(), chiSquare,
                 2 * perComponent, lines.absolute());
     }
 

@@ -4,11 +4,6 @@ import java.util.ArrayList;
 import java.util.List;
 
 import org.hipparchus.complex.Complex;
-import org.hipparchus.linear.Array2DRowRealMatrix;
-import org.hipparchus.linear.ArrayRealVector;
-import org.hipparchus.linear.RealMatrix;
-import org.hipparchus.linear.RealVector;
-import org.hipparchus.util.Pair;
 
 /**
  * The weighted modal receptance model and its analytic Jacobian, shared by the refinement and the Cramer-Rao bound.
@@ -94,20 +89,6 @@ final class ModalRefinementModel {
         return start.clone();
     }
 
-    /** @return the whitened stacked model values and the Jacobian (rows = values), for the optimiser */
-    Pair<RealVector, RealMatrix> evaluate(RealVector point) {
-        double[] p = point.toArray();
-        double[] values = new double[valueCount()];
-        double[][] columns = jacobianColumns(p, values);
-        double[][] rows = new double[values.length][columns.length];
-        for (int j = 0; j < columns.length; j++) {
-            for (int i = 0; i < values.length; i++) {
-                rows[i][j] = columns[j][i];
-            }
-        }
-        return new Pair<>(new ArrayRealVector(values, false), new Array2DRowRealMatrix(rows, false));
-    }
-
     /**
      * The Jacobian by columns, filling the whitened model values when asked.
      *
@@ -158,6 +139,48 @@ final class ModalRefinementModel {
             }
         }
         return columns;
+    }
+
+    /**
+     * The whitened stacked model values alone, without the Jacobian.
+     *
+     * @param p scaled parameters
+     * @param values receives the 2m values
+     * @return {@code values}
+     */
+    double[] values(double[] p, double[] values) {
+        int n = w0.length;
+        for (int k = 0; k < w.length; k++) {
+            double wk = w[k];
+            double re = 0;
+            double im = 0;
+            int c = 0;
+            for (int r = 0; r < n; r++) {
+                double wn = w0[r] * p[c];
+                double zeta = zeta0[r] * Math.exp(p[c + 1]);
+                double ar = aScale[r] * p[c + 2];
+                double ai = realModes ? 0 : aScale[r] * p[c + 3];
+                double dr = wn * wn - wk * wk;
+                double di = 2 * zeta * wn * wk;
+                double d2 = dr * dr + di * di;
+                re += (ar * dr + ai * di) / d2;
+                im += (ai * dr - ar * di) / d2;
+                c += realModes ? 3 : 4;
+            }
+            if (upper) {
+                re += upperScale * p[c];
+                im += upperScale * p[c + 1];
+                c += 2;
+            }
+            if (lower) {
+                double g = -lowerScale / (wk * wk);
+                re += g * p[c];
+                im += g * p[c + 1];
+            }
+            values[2 * k] = root[k] * re;
+            values[2 * k + 1] = root[k] * im;
+        }
+        return values;
     }
 
     private static void put(double[] column, int k, double sq, Complex value) {

@@ -37,7 +37,8 @@ public final class ModeSelection {
      * One chosen pole and the evidence for it.
      *
      * @param pole the pole
-     * @param supportingOrders the number of chart orders with a stable pole in its column (0 when added by hand)
+     * @param supportingOrders the number of chart orders with a stable pole in its column (0 when added by hand or found
+     *     in the residual of a fit, see {@code ModalResidualSearch})
      * @param possibleOrders the number of chart orders from the column's first appearance up (0 when added by hand)
      * @param addedByHand whether the user added it
      */
@@ -127,6 +128,18 @@ public final class ModeSelection {
         }
         List<Entry> next = new ArrayList<>(entries);
         next.add(new Entry(pole, 0, 0, true));
+        return new ModeSelection(next);
+    }
+
+    /**
+     * This selection with one more pole, found in the residual of a fit rather than on the chart.
+     *
+     * @param pole the pole to add
+     * @return a new selection, in increasing frequency; the entry has no chart support and is not marked as by hand
+     */
+    ModeSelection withFoundInResidual(Pole pole) {
+        List<Entry> next = new ArrayList<>(entries);
+        next.add(new Entry(pole, 0, 0, false));
         return new ModeSelection(next);
     }
 
