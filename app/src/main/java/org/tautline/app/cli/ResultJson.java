@@ -84,6 +84,21 @@ final class ResultJson {
             properties.put("forcingPositionMismatch", p.forcingMismatch());
             properties.put("sensorPositionMismatch", p.sensorMismatch());
         });
+        r.linearity().ifPresent(l -> {
+            ObjectNode linearity = root.putObject("linearity");
+            linearity.put("linear", l.linear());
+            ArrayNode shifts = linearity.putArray("shifts");
+            l.shifts().forEach(h -> {
+                ObjectNode node = shifts.addObject();
+                node.put("harmonic", h.harmonic());
+                node.put("firstFrequencyHz", h.firstFrequencyHz());
+                node.put("secondFrequencyHz", h.secondFrequencyHz());
+                node.put("relativeShift", h.relativeShift());
+                putFinite(node, "relativeShiftStd", h.relativeShiftStd());
+                putFinite(node, "predictedRelativeShift", h.predictedRelativeShift());
+                node.put("significant", h.significant());
+            });
+        });
         r.sweep().ifPresent(sweep -> {
             root.put("rigTimeS", sweep.rigTimeS());
             root.put("steps", sweep.points().size());

@@ -1,7 +1,9 @@
 package org.tautline.app.qualify;
 
+import java.util.Optional;
 import java.util.function.BooleanSupplier;
 
+import org.tautline.analysis.specimen.LinearityResult;
 import org.tautline.analysis.specimen.Specimen;
 import org.tautline.analysis.verdict.Specification;
 import org.tautline.driver.sim.SimulatedRig;
@@ -30,7 +32,8 @@ public final class DemoRun {
     }
 
     /**
-     * Sweeps a simulated specimen and qualifies it against what was stated about it.
+     * Sweeps a simulated specimen, qualifies it against what was stated about it, then checks the
+     * fundamental at a second, higher level (see {@link LevelCheck}).
      *
      * @param simulation the specimen as it really is, with the rig
      * @param stated what the technician states about the specimen
@@ -46,7 +49,14 @@ public final class DemoRun {
         try (SimulatedRig rig = new SimulatedRig(simulation)) {
             SimulationTruth truth = rig.truth();
             SweepRecord sweep = new SteppedSineRunner(rig).run(plan, listener, cancelRequested);
-            return new DemoOutcome(Qualification.analyse(stated, sweep, specification, startNs), truth);
+            QualificationResult result = Qualification.analyse(stated, sweep, specification, startNs);
+            if (sweep.completed()) {
+                Optional<LinearityResult> linearity = LevelCheck.run(rig, result, plan, SweepListener.NONE, cancelRequested);
+                if (linearity.isPresent()) {
+                    result = Qualification.withLinearity(result, linearity.get(), Optional.of(specification));
+                }
+            }
+            return new DemoOutcome(result, truth);
         }
     }
 }

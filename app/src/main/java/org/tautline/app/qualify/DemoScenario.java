@@ -53,6 +53,7 @@ public final class DemoScenario {
                 Limit.atMost("inharmonicity", "inharmonicityB", "", 1e-3),
                 Limit.between("damping of the fundamental", "dampingRatio1", "", 0.001, 0.01),
                 Limit.between("stinger position", "forcingPositionM", "m", 0.055, 0.085),
+                Limit.between("shift of f1 between test levels", "linearityShift1", "", -1e-3, 1e-3),
                 Limit.atMost("FRF standard error at resonances", "resonanceFrfRelativeStdError", "", 0.05)));
     }
 

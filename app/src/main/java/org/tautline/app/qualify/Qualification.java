@@ -17,6 +17,7 @@ import org.tautline.analysis.modal.Mode;
 import org.tautline.analysis.specimen.AssignedMode;
 import org.tautline.analysis.specimen.HarmonicAssigner;
 import org.tautline.analysis.specimen.HarmonicAssignment;
+import org.tautline.analysis.specimen.LinearityResult;
 import org.tautline.analysis.specimen.NumberedFrequency;
 import org.tautline.analysis.specimen.ParticipationPattern;
 import org.tautline.analysis.specimen.PatternFit;
@@ -101,7 +102,27 @@ public final class Qualification {
         Frf synthesized = ModalSynthesis.synthesize(modal.plainModes(), receptance.frequenciesHz(), FrfQuantity.RECEPTANCE);
         double wallS = (System.nanoTime() - wallStartNs) * 1e-9;
         return new QualificationResult(specimen, sweep, receptance, synthesized, modal, modes, harmonics, tension,
-                participation, measured, verdict, wallS);
+                participation, Optional.empty(), measured, verdict, wallS);
+    }
+
+    /**
+     * Adds a level check to a result: its relative shift of f1 ({@code linearityShift1}) joins the
+     * figures and the verdict is judged again.
+     *
+     * @param result the qualification
+     * @param linearity the comparison of two test levels
+     * @param specification the limits, if any
+     * @return the result with the level check
+     */
+    public static QualificationResult withLinearity(QualificationResult result, LinearityResult linearity,
+                                                    Optional<Specification> specification) {
+        Map<String, Measurement> measured = new LinkedHashMap<>(result.measurements());
+        linearity.shifts().stream().filter(s -> s.harmonic() == 1).findFirst().ifPresent(s -> putKnown(measured,
+                "linearityShift1", s.relativeShift(), s.relativeShiftStd(), ""));
+        Optional<Verdict> verdict = specification.map(spec -> Verdict.evaluate(spec, measured));
+        return new QualificationResult(result.specimen(), result.sweep(), result.receptance(), result.synthesized(),
+                result.modal(), result.modes(), result.harmonics(), result.tension(), result.participation(),
+                Optional.of(linearity), measured, verdict, result.wallTimeS());
     }
 
     private static int polarisationOf(HarmonicAssignment harmonics, int modeIndex) {

@@ -6,6 +6,7 @@ import java.util.Optional;
 import org.tautline.analysis.frf.Frf;
 import org.tautline.analysis.modal.ModalEstimate;
 import org.tautline.analysis.specimen.HarmonicAssignment;
+import org.tautline.analysis.specimen.LinearityResult;
 import org.tautline.analysis.specimen.PatternFit;
 import org.tautline.analysis.specimen.Specimen;
 import org.tautline.analysis.specimen.TensionEstimate;
@@ -25,6 +26,7 @@ import org.tautline.driver.sweep.SweepRecord;
  * @param harmonics the harmonic numbering, with the absent harmonics and why
  * @param tension tension and bending stiffness from the harmonic series, absent when no harmonic was numbered
  * @param participation measured against expected modal constants, absent with fewer than two harmonics
+ * @param linearity the fundamental at two test levels, absent when no level check was run
  * @param measurements every figure the verdict may judge, by key
  * @param verdict the verdict against the specification, absent when no specification was given
  * @param wallTimeS wall-clock time of the qualification, s
@@ -32,7 +34,7 @@ import org.tautline.driver.sweep.SweepRecord;
 public record QualificationResult(Specimen specimen, Optional<SweepRecord> sweep, Frf receptance, Frf synthesized,
                                   ModalEstimate modal, List<QualifiedMode> modes, HarmonicAssignment harmonics,
                                   Optional<TensionEstimate> tension, Optional<PatternFit> participation,
-                                  java.util.Map<String, Measurement> measurements, Optional<Verdict> verdict,
+                                  Optional<LinearityResult> linearity, java.util.Map<String, Measurement> measurements, Optional<Verdict> verdict,
                                   double wallTimeS) {
 
     /** Copies the collections. */

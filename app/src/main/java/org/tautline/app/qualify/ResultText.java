@@ -110,5 +110,12 @@ public final class ResultText {
                     p.forcingPositionM(), p.forcingPositionStdM(), p.sensorPositionM(), p.sensorPositionStdM()));
             p.findings().forEach(f -> out.append("  ").append(f).append('\n'));
         }
+        r.linearity().ifPresent(l -> {
+            l.shifts().forEach(h -> out.append(String.format(Locale.ROOT,
+                    "  level check, harmonic %d: %.3f -> %.3f Hz, shift %.3g +/- %.2g (Kirchhoff-Carrier predicts %.3g)%n",
+                    h.harmonic(), h.firstFrequencyHz(), h.secondFrequencyHz(), h.relativeShift(), h.relativeShiftStd(),
+                    h.predictedRelativeShift())));
+            l.findings().forEach(f -> out.append("  ").append(f).append('\n'));
+        });
     }
 }
