@@ -66,6 +66,23 @@ public final class RigDrivers {
     }
 
     /**
+     * A registry of exactly the given drivers, for embedding Tautline or testing; no plugins are loaded.
+     *
+     * @param drivers the drivers; names must differ
+     * @return the registry
+     * @throws RigException when two drivers share a name
+     */
+    public static RigDrivers of(List<RigDriver> drivers) {
+        Map<String, RigDriver> byName = new java.util.TreeMap<>();
+        for (RigDriver driver : drivers) {
+            if (byName.put(driver.name(), driver) != null) {
+                throw new RigException("two rig drivers are named '" + driver.name() + "'");
+            }
+        }
+        return new RigDrivers(new LinkedHashMap<>(byName), List.of());
+    }
+
+    /**
      * Finds the drivers on the class path and in the given plugins folders.
      *
      * @param pluginFolders folders whose {@code *.jar} files hold drivers; missing folders are skipped
