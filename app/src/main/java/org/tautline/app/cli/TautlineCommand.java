@@ -6,7 +6,8 @@ import picocli.CommandLine.Command;
 @Command(name = "tautline", mixinStandardHelpOptions = true, version = "Tautline 0.1.0",
         description = "Vibration qualification of tensioned strings, wires and belts."
                 + " With no command, opens the workbench window.",
-        subcommands = {DemoCommand.class, FrfCommand.class, FitCommand.class, BenchCommand.class})
+        subcommands = {DemoCommand.class, FrfCommand.class, FitCommand.class, BenchCommand.class, RigsCommand.class,
+                SweepCommand.class, ResumeCommand.class})
 final class TautlineCommand implements Runnable {
     @picocli.CommandLine.Spec
     private picocli.CommandLine.Model.CommandSpec spec;

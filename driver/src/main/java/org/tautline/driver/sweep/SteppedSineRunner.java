@@ -2,10 +2,9 @@ package org.tautline.driver.sweep;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.function.BooleanSupplier;
 
-import org.tautline.analysis.signal.SineFit;
-import org.tautline.analysis.signal.SinePhasor;
 import org.tautline.driver.RigException;
 import org.tautline.driver.spi.Acquisition;
 import org.tautline.driver.spi.ChannelInfo;
@@ -19,8 +18,15 @@ import org.tautline.driver.spi.SampleBlock;
  * <p>At each step the drive is set (phase-continuous), the rig settles for the plan's settle time,
  * then a whole number of cycles of force (channel 0) and response (channel 1) are fitted by the
  * three-parameter sine fit of IEEE Std 1057 with harmonics for distortion; the FRF value is the
- * ratio of the response and force phasors. The drive ramps up at the start and, whatever happens
- * (completion, cancel, fault), ramps down and the output is switched off before the runner returns.
+ * ratio of the response and force phasors. Each completed step goes to the {@link SweepJournal}
+ * before the next step is commanded.
+ *
+ * <p>How it stops: on completion or cancel the drive ramps down and the output is switched off; a
+ * cancel discards the step in progress. On a fault (any exception from the rig, the fit, the journal
+ * or the listener) the output is switched off at once with no ramp (the link may be the thing that
+ * failed), the step in progress is discarded (never retried: a half-settled step would not match an
+ * uninterrupted run), the fault is recorded in the journal, and a {@link SweepFaultException} keeping
+ * the completed steps is thrown. The runner always leaves the output off, whatever happens.
  */
 public final class SteppedSineRunner {
     /** Settle samples are read in chunks of this many so that a cancel is seen quickly. */
@@ -34,57 +40,173 @@ public final class SteppedSineRunner {
     }
 
     /**
-     * Runs the plan.
+     * Runs the plan without a journal.
      *
      * @param plan what to run
      * @param listener progress after every step
      * @param cancelRequested polled between chunks; true stops the sweep after ramping down
      * @return the completed steps; {@code completed} is false after a cancel
-     * @throws RigException on a rig fault, after the drive has been switched off
+     * @throws RigException when the rig cannot run the plan ({@link #check(SteppedSinePlan)}), or a
+     *         {@link SweepFaultException} on a fault, after the output has been switched off
      */
     public SweepRecord run(SteppedSinePlan plan, SweepListener listener, BooleanSupplier cancelRequested) {
-        Acquisition acquisition = rig.acquisition();
+        return run(plan, listener, cancelRequested, SweepJournal.NONE);
+    }
+
+    /**
+     * Runs the plan, recording every completed step in a journal.
+     *
+     * @param plan what to run
+     * @param listener progress after every step
+     * @param cancelRequested polled between chunks; true stops the sweep after ramping down
+     * @param journal receives every completed step and how the sweep ended
+     * @return the completed steps; {@code completed} is false after a cancel
+     * @throws RigException when the rig cannot run the plan, or a {@link SweepFaultException} on a fault
+     */
+    public SweepRecord run(SteppedSinePlan plan, SweepListener listener, BooleanSupplier cancelRequested,
+                           SweepJournal journal) {
+        String quantity = check(plan);
+        return sweep(new SweepRecord(plan, quantity, List.of(), 0.0, false), listener, cancelRequested, journal);
+    }
+
+    /**
+     * Runs the steps of a plan that an interrupted sweep did not complete, after the ones it did.
+     *
+     * <p>The drive ramps up at the first step still to do. Points of the new steps carry rig times
+     * that go on from the last completed step's, leaving out the ramp-up of the resumed session, so
+     * a resumed sweep's rig times are those an uninterrupted sweep would have had.
+     *
+     * @param partial the sweep so far: its plan and the completed steps, in order
+     * @param listener progress after every step, counting the earlier steps as done
+     * @param cancelRequested polled between chunks
+     * @param journal receives every new step and how the sweep ended
+     * @return the whole sweep: the earlier steps, then the new ones
+     * @throws RigException when the partial record does not fit its plan or this rig, or a {@link SweepFaultException}
+     */
+    public SweepRecord continueFrom(SweepRecord partial, SweepListener listener, BooleanSupplier cancelRequested,
+                                    SweepJournal journal) {
+        String quantity = check(partial.plan());
+        if (!quantity.equals(partial.responseQuantity())) {
+            throw new RigException("the sweep so far measured " + partial.responseQuantity() + " but this rig's channel 1"
+                    + " measures " + quantity + "; resume on the rig the sweep was started on");
+        }
+        double[] f = partial.plan().frequenciesHz();
+        if (partial.points().size() > f.length) {
+            throw new RigException("the sweep so far has " + partial.points().size() + " steps but its plan only "
+                    + f.length);
+        }
+        for (int i = 0; i < partial.points().size(); i++) {
+            if (partial.points().get(i).frequencyHz() != f[i]) {
+                throw new RigException("step " + (i + 1) + " of the sweep so far is at " + partial.points().get(i).frequencyHz()
+                        + " Hz but the plan puts it at " + f[i] + " Hz; the steps do not belong to this plan");
+            }
+        }
+        return sweep(partial, listener, cancelRequested, journal);
+    }
+
+    /**
+     * Checks that this rig can run the plan: force on channel 0, a motion on channel 1, the drive within the limit.
+     *
+     * @param plan the plan
+     * @return what channel 1 measures: displacement, velocity or acceleration
+     * @throws RigException saying what does not fit
+     */
+    public String check(SteppedSinePlan plan) {
+        String responseQuantity = checkChannels(rig.acquisition().channels());
         Exciter exciter = rig.exciter();
-        String responseQuantity = checkChannels(acquisition.channels());
         if (plan.driveAmplitudeV() > exciter.maxAmplitudeV()) {
             throw new RigException("sweep plan: drive amplitude " + plan.driveAmplitudeV() + " V is above the exciter's limit of "
                     + exciter.maxAmplitudeV() + " V");
         }
+        return responseQuantity;
+    }
+
+    private SweepRecord sweep(SweepRecord before, SweepListener listener, BooleanSupplier cancelRequested,
+                              SweepJournal journal) {
+        SteppedSinePlan plan = before.plan();
+        Acquisition acquisition = rig.acquisition();
+        Exciter exciter = rig.exciter();
         double fs = acquisition.sampleRateHz();
         double[] frequencies = plan.frequenciesHz();
-        double startRigS = acquisition.rigTimeS();
-        long startWallNs = System.nanoTime();
         double[] remainingAfterStepS = remainingRigTimeAfterEachStep(plan, frequencies, fs);
-        List<SweepPoint> points = new ArrayList<>(frequencies.length);
-        boolean completed = false;
+        List<SweepPoint> points = new ArrayList<>(before.points());
+        int firstStep = points.size();
+        double offsetS = firstStep == 0 ? 0.0 : points.get(firstStep - 1).rigTimeS();
+        double originS = acquisition.rigTimeS();
+        long startWallNs = System.nanoTime();
         try {
-            exciter.setSine(frequencies[0], 0.0);
-            exciter.setOutputEnabled(true);
-            exciter.rampTo(plan.driveAmplitudeV(), plan.rampS());
-            for (int step = 0; step < frequencies.length; step++) {
+            if (firstStep < frequencies.length) {
+                exciter.setSine(frequencies[firstStep], 0.0);
+                exciter.setOutputEnabled(true);
+                exciter.rampTo(plan.driveAmplitudeV(), plan.rampS());
+            }
+            if (firstStep > 0) {
+                originS = acquisition.rigTimeS();
+            }
+            for (int step = firstStep; step < frequencies.length; step++) {
                 double f = frequencies[step];
                 exciter.setSine(f, plan.driveAmplitudeV());
                 if (!settle(acquisition, plan.settleTimeS(f), cancelRequested)) {
                     break;
                 }
                 SampleBlock block = acquisition.read(plan.integrationSamples(f, fs));
-                SweepPoint point = fitStep(block, f, plan, fs, acquisition.rigTimeS() - startRigS);
-                points.add(point);
-                double rigSoFar = acquisition.rigTimeS() - startRigS;
-                double remainingRig = remainingAfterStepS[step];
+                double rigSoFar = offsetS + acquisition.rigTimeS() - originS;
+                CompletedStep done = StepFit.fit(step, block, f, plan, fs, rigSoFar);
+                journal.stepCompleted(done);
+                points.add(done.point());
+                double sessionRigS = acquisition.rigTimeS() - originS;
                 double wallSoFar = (System.nanoTime() - startWallNs) * 1e-9;
-                double remainingWall = rigSoFar > 0 ? wallSoFar / rigSoFar * remainingRig : Double.NaN;
+                double remainingRig = remainingAfterStepS[step];
+                double remainingWall = sessionRigS > 0 ? wallSoFar / sessionRigS * remainingRig : Double.NaN;
                 listener.onStep(new SweepProgress(step + 1, frequencies.length, f, rigSoFar, remainingRig, remainingWall,
-                        point));
+                        done.point()));
                 if (cancelRequested.getAsBoolean()) {
                     break;
                 }
             }
-            completed = points.size() == frequencies.length;
-        } finally {
-            switchOff(exciter, plan.rampS());
+        } catch (RuntimeException fault) {
+            throw stopOnFault(fault, before, points, "at step " + (points.size() + 1) + " of "
+                    + frequencies.length + " (" + hz(frequencies[Math.min(points.size(), frequencies.length - 1)]) + ")",
+                    journal);
         }
-        return new SweepRecord(plan, responseQuantity, points, acquisition.rigTimeS() - startRigS, completed);
+        try {
+            switchOff(exciter, plan.rampS());
+        } catch (RuntimeException fault) {
+            throw stopOnFault(fault, before, points, "while switching the output off after step "
+                    + points.size(), journal);
+        }
+        boolean completed = points.size() == frequencies.length;
+        SweepRecord record = new SweepRecord(plan, before.responseQuantity(), points,
+                offsetS + acquisition.rigTimeS() - originS, completed);
+        journal.sweepEnded(completed ? SweepStatus.COMPLETED : SweepStatus.CANCELLED, completed
+                ? "all " + frequencies.length + " steps completed"
+                : "cancelled after " + points.size() + " of " + frequencies.length + " steps");
+        return record;
+    }
+
+    /** Switches the output off at once, records the fault, and builds the exception to throw. */
+    private SweepFaultException stopOnFault(RuntimeException fault, SweepRecord before, List<SweepPoint> points,
+                                            String where, SweepJournal journal) {
+        try {
+            rig.exciter().setOutputEnabled(false);
+        } catch (RuntimeException offFault) {
+            fault.addSuppressed(offFault);
+        }
+        String cause = fault.getMessage() == null ? fault.getClass().getName() : fault.getMessage();
+        try {
+            journal.sweepEnded(SweepStatus.FAULT, cause);
+        } catch (RuntimeException journalFault) {
+            fault.addSuppressed(journalFault);
+        }
+        // The rig clock may be unreadable after a fault: the partial record ends at its last completed step.
+        double rigTimeS = points.isEmpty() ? 0.0 : points.get(points.size() - 1).rigTimeS();
+        SweepRecord partial = new SweepRecord(before.plan(), before.responseQuantity(), points, rigTimeS, false);
+        return new SweepFaultException("sweep stopped by a fault " + where + "; the output is off and the "
+                + points.size() + " completed step(s) are kept: " + cause, partial, fault);
+    }
+
+    private static String hz(double f) {
+        return String.format(Locale.ROOT, "%.2f Hz", f);
     }
 
     /** Planned rig time still to go after each step: the later steps and the final ramp, s. */
@@ -129,23 +251,7 @@ public final class SteppedSineRunner {
         return !cancelRequested.getAsBoolean();
     }
 
-    private static SweepPoint fitStep(SampleBlock block, double f, SteppedSinePlan plan, double fs, double rigTimeS) {
-        SinePhasor[] fitted = SineFit.fitChannels(new double[][] {block.samples()[0], block.samples()[1]}, fs, f,
-                plan.harmonicOrder());
-        SinePhasor force = fitted[0];
-        SinePhasor response = fitted[1];
-        if (!(force.amplitude() > 0)) {
-            throw new RigException("no force measured at " + f + " Hz: check the force sensor on channel 0 and the stinger");
-        }
-        double relForceErr = force.amplitudeStd() / force.amplitude();
-        double relResponseErr = response.amplitude() > 0 ? response.amplitudeStd() / response.amplitude() : 1.0;
-        return new SweepPoint(f, plan.driveAmplitudeV(), response.phasor().divide(force.phasor()), force.amplitude(),
-                response.amplitude(), Math.max(force.relativeResidual(), response.relativeResidual()),
-                Math.hypot(relForceErr, relResponseErr), force.totalHarmonicDistortion(),
-                response.totalHarmonicDistortion(), rigTimeS);
-    }
-
-    /** Ramps the drive down and switches the output off; a fault here must not hide the first one. */
+    /** Ramps the drive down and switches the output off; a failed ramp still ends with the output off. */
     private static void switchOff(Exciter exciter, double rampS) {
         try {
             if (exciter.isOutputEnabled()) {

@@ -1,6 +1,7 @@
 package org.tautline.driver.sweep;
 
 import org.hipparchus.complex.Complex;
+import org.tautline.analysis.signal.SinePhasor;
 
 /**
  * One completed step of a stepped-sine sweep.
@@ -19,4 +20,24 @@ import org.hipparchus.complex.Complex;
 public record SweepPoint(double frequencyHz, double driveAmplitudeV, Complex response, double forceAmplitudeN,
                          double responseAmplitude, double relativeResidual, double relativeStdError,
                          double forceDistortion, double responseDistortion, double rigTimeS) {
+
+    /**
+     * The point of a step from its two sine fits: the same arithmetic whether the fits are fresh or read back.
+     *
+     * @param frequencyHz step frequency, Hz
+     * @param driveAmplitudeV commanded peak drive, V
+     * @param force the force channel's fit
+     * @param response the response channel's fit
+     * @param rigTimeS rig time when the integration ended, s
+     * @return the point: response / force, the larger relative residual, the combined relative error
+     */
+    public static SweepPoint of(double frequencyHz, double driveAmplitudeV, SinePhasor force, SinePhasor response,
+                                double rigTimeS) {
+        double relForceErr = force.amplitudeStd() / force.amplitude();
+        double relResponseErr = response.amplitude() > 0 ? response.amplitudeStd() / response.amplitude() : 1.0;
+        return new SweepPoint(frequencyHz, driveAmplitudeV, response.phasor().divide(force.phasor()), force.amplitude(),
+                response.amplitude(), Math.max(force.relativeResidual(), response.relativeResidual()),
+                Math.hypot(relForceErr, relResponseErr), force.totalHarmonicDistortion(),
+                response.totalHarmonicDistortion(), rigTimeS);
+    }
 }

@@ -92,10 +92,16 @@ class SteppedSineRunnerTest {
             }
             return Complex.ONE;
         }, SteppedSineRunnerTest::sdof);
-        RigException e = assertThrows(RigException.class,
+        SweepFaultException e = assertThrows(SweepFaultException.class,
                 () -> new SteppedSineRunner(rig).run(PLAN, SweepListener.NONE, () -> false));
-        assertTrue(e.getMessage().startsWith("link lost at"), e.getMessage());
+        // Step 13 is the first above 300 Hz: 200 * 2^(12/20) = 303.14 Hz.
+        assertEquals("sweep stopped by a fault at step 13 of 21 (303.14 Hz); the output is off and the 12 completed"
+                + " step(s) are kept: link lost at 303.1433133020796 Hz", e.getMessage());
+        assertEquals(12, e.partial().points().size());
+        assertFalse(e.partial().completed());
+        assertTrue(e.getCause().getMessage().startsWith("link lost at"));
         assertEquals("off", rig.commands.get(rig.commands.size() - 1));
+        assertFalse(rig.commands.contains("ramp 0.0"), "a fault switches the output off at once, without a ramp");
     }
 
     @Test

@@ -1,0 +1,43 @@
+package org.tautline.driver.journal;
+
+import java.nio.file.Path;
+import java.time.Clock;
+import java.time.Instant;
+import java.time.ZoneOffset;
+import java.util.Map;
+
+import org.tautline.driver.sim.SimulatedRigDriver;
+import org.tautline.driver.spi.Rig;
+import org.tautline.driver.sweep.SteppedSinePlan;
+
+/** Shared set-up of the journal tests: the clean simulated demo wire and a short plan. */
+final class JournalFixtures {
+    /** The simulated rig's options as the sim driver records them. */
+    static final Map<String, String> SIM_OPTIONS = Map.of("scenario", "demo-wire-clean", "seed", "1");
+    /**
+     * 13 steps over 150..300 Hz around the demo wire's fundamental (about 228 Hz). 400 settle cycles are
+     * at least 2.7 s, 13 time constants of the fundamental (zeta about 0.35 %): a step's leftover
+     * transient is below e^-13 = 2e-6 of its start, so a resumed sweep (which starts at rest) settles
+     * to what an uninterrupted one measures.
+     */
+    static final SteppedSinePlan PLAN = new SteppedSinePlan(150, 300, 13, 400, 0.0, 20, 1.0, 0.02, 3);
+    static final Clock CLOCK = Clock.fixed(Instant.parse("2025-03-01T09:30:00Z"), ZoneOffset.UTC);
+
+    private JournalFixtures() {
+    }
+
+    static Rig cleanRig() {
+        return new SimulatedRigDriver().open(SIM_OPTIONS);
+    }
+
+    static JournalHeader header(Rig rig, boolean samples) {
+        return new JournalHeader(JournalHeader.FORMAT_VERSION, CLOCK.instant(), "sim",
+                new java.util.TreeMap<>(SIM_OPTIONS), rig.identity(), rig.acquisition().sampleRateHz(),
+                rig.acquisition().channels(), PLAN, samples ? JournaledSweep.SAMPLES_FILE : "");
+    }
+
+
+    static Path journal(Path dir) {
+        return dir.resolve("journal");
+    }
+}
