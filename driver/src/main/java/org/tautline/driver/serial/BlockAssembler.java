@@ -13,7 +13,8 @@ import org.tautline.driver.RigLinkException.Kind;
  * <p>A CRC fault is charged to the block awaited; a block with a later sequence number means those
  * between are missing (a gap) and is kept until they are in; silence for the block timeout means the
  * awaited block is lost. Each of these re-requests the awaited block once ({@code ACQ:RESEND? <seq>});
- * a second failure ends the read with a {@link RigLinkException} of the first fault's kind.
+ * when it has still not arrived intact one block timeout after the re-request, the read ends with a
+ * {@link RigLinkException} of the first fault's kind ({@link Kind#TIMEOUT} when there was only silence).
  */
 final class BlockAssembler {
     /** Sends a re-request for one sequence number. */
@@ -92,13 +93,13 @@ final class BlockAssembler {
                 throw giveUp(sequence, timeoutMs, cause);
             }
             if (event instanceof RigLinkException crc) {
+                // The damaged block is taken to be the one awaited; if it was a later one, that one shows up
+                // missing in turn and is re-requested by its own number.
                 cause = cause == null ? crc : cause;
-                if (reRequested.contains(sequence)) {
-                    throw new RigLinkException(Kind.CRC, port, "data block " + sequence + " failed its CRC-32 again"
-                            + " after a re-request", "an intact block on the second try; check the cable and baud rate");
+                if (!reRequested.contains(sequence)) {
+                    reRequest(sequence, requester);
+                    deadline = System.nanoTime() + timeoutMs * 1_000_000L;
                 }
-                reRequest(sequence, requester);
-                deadline = System.nanoTime() + timeoutMs * 1_000_000L;
                 continue;
             }
             DataBlock block = (DataBlock) event;
@@ -139,8 +140,8 @@ final class BlockAssembler {
                     + timeoutMs + " ms, nor after a re-request", "the next block of the request");
         }
         Kind kind = cause.kind();
-        String what = kind == Kind.CRC ? "data block " + sequence + " failed its CRC-32 and its re-request was not"
-                + " answered within " + timeoutMs + " ms"
+        String what = kind == Kind.CRC ? "data block " + sequence + " failed its CRC-32 and did not arrive intact"
+                + " within " + timeoutMs + " ms of its re-request"
                 : "data block " + sequence + " is missing (a later block arrived) and its re-request was not"
                 + " answered within " + timeoutMs + " ms";
         return new RigLinkException(kind, port, what, "the device to resend the block from its history");

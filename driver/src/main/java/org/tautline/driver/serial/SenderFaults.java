@@ -12,8 +12,10 @@ final class SenderFaults {
     static final String GARBLED = "~~garbled~~";
 
     private int dropBytes;
-    private int corruptBlocks;
-    private int loseBlocks;
+    private int corruptTimes;
+    private long corruptSequence = -1;
+    private int loseTimes;
+    private long loseSequence = -1;
     private boolean garbleNextReply;
     private byte[] garbage;
     private long stallUntilNs;
@@ -23,12 +25,20 @@ final class SenderFaults {
         dropBytes = count;
     }
 
-    synchronized void corruptBlocks(int count) {
-        corruptBlocks = count;
+    synchronized void corruptBlock(int times) {
+        corruptTimes = times;
+        corruptSequence = -1;
     }
 
-    synchronized void loseBlocks(int count) {
-        loseBlocks = count;
+    synchronized void loseBlock(int times) {
+        loseTimes = times;
+        loseSequence = -1;
+    }
+
+    /** Reads the sequence number from an encoded block. */
+    private static long sequenceOf(byte[] block) {
+        int h = 2 + (block[1] - '0');
+        return Integer.toUnsignedLong((int) BlockCodec.I32.get(block, h + 4));
     }
 
     synchronized void garbleNextReply() {
@@ -72,17 +82,20 @@ final class SenderFaults {
                 log.accept("inserted " + garbage.length + " garbage bytes");
                 garbage = null;
             }
-            if (loseBlocks > 0) {
-                loseBlocks--;
-                log.accept("lost a block of " + item.length + " bytes");
+            long sequence = sequenceOf(item);
+            if (loseTimes > 0 && (loseSequence < 0 || loseSequence == sequence)) {
+                loseSequence = sequence;
+                loseTimes--;
+                log.accept("lost block " + sequence);
                 return out;
             }
             byte[] b = item;
-            if (corruptBlocks > 0) {
-                corruptBlocks--;
+            if (corruptTimes > 0 && (corruptSequence < 0 || corruptSequence == sequence)) {
+                corruptSequence = sequence;
+                corruptTimes--;
                 b = item.clone();
                 b[b.length / 2] ^= 0x10;
-                log.accept("corrupted a block at byte " + b.length / 2);
+                log.accept("corrupted block " + sequence + " at byte " + b.length / 2);
             }
             if (dropBytes > 0) {
                 int cut = Math.min(dropBytes, b.length / 4);

@@ -143,14 +143,14 @@ public final class VirtualRigServer implements AutoCloseable {
         faults.dropBytes(count);
     }
 
-    /** @param count the next {@code count} data blocks sent (resends included) get one sample byte flipped */
-    public void corruptBlocks(int count) {
-        faults.corruptBlocks(count);
+    /** @param times the next data block gets one sample byte flipped, and so do its first {@code times - 1} resends */
+    public void corruptBlock(int times) {
+        faults.corruptBlock(times);
     }
 
-    /** @param count the next {@code count} data blocks sent (resends included) are not sent at all */
-    public void loseBlocks(int count) {
-        faults.loseBlocks(count);
+    /** @param times the next data block is not sent, nor are its first {@code times - 1} resends */
+    public void loseBlock(int times) {
+        faults.loseBlock(times);
     }
 
     /** @param garbage bytes sent just before the next data block */
