@@ -51,6 +51,8 @@ final class VirtualDevice {
     private int watchdogMs = DEFAULT_WATCHDOG_MS;
     private int protocolVersion = PROTOCOL_MAX;
     private boolean streaming;
+    private double frequencyHz;
+    private double amplitudeV;
     private long lastActivityNs = System.nanoTime();
     private final double[] sensitivity;
 
@@ -81,6 +83,8 @@ final class VirtualDevice {
         blockSamples = DEFAULT_BLOCK_SAMPLES;
         watchdogMs = DEFAULT_WATCHDOG_MS;
         streaming = false;
+        frequencyHz = 0.0;
+        amplitudeV = 0.0;
         log.accept("reset: state forgotten, output off, boot " + bootCount);
         send("!RESET " + bootCount);
     }
@@ -188,7 +192,10 @@ final class VirtualDevice {
             case "*IDN?" -> "Tautline,Virtual rig,SIM-" + config.randomSeed() + "," + PROTOCOL_MAX + ".0";
             case "*RST" -> {
                 rig.exciter().setOutputEnabled(false);
-                rig.exciter().setSine(Math.min(1000.0, config.sampleRateHz() / 4), 0.0);
+                amplitudeV = 0.0;
+                if (frequencyHz > 0) {
+                    rig.exciter().setSine(frequencyHz, 0.0);
+                }
                 streaming = false;
                 format = SampleFormat.FLOAT32_LE;
                 blockSamples = DEFAULT_BLOCK_SAMPLES;
@@ -215,11 +222,17 @@ final class VirtualDevice {
             case "LINK:FEED" -> null;
             case "LINK:BOOT?" -> Integer.toString(bootCount);
             case "DRIVE:SINE" -> {
-                rig.exciter().setSine(number(p, 0), number(p, 1));
+                double f = number(p, 0);
+                double a = number(p, 1);
+                rig.exciter().setSine(f, a);
+                frequencyHz = f;
+                amplitudeV = a;
                 yield null;
             }
             case "DRIVE:RAMP" -> {
-                rig.exciter().rampTo(number(p, 0), number(p, 1));
+                double a = number(p, 0);
+                rig.exciter().rampTo(a, number(p, 1));
+                amplitudeV = a;
                 yield null;
             }
             case "DRIVE:OUT" -> {
@@ -227,6 +240,8 @@ final class VirtualDevice {
                 yield null;
             }
             case "DRIVE:OUT?" -> rig.exciter().isOutputEnabled() ? "1" : "0";
+            case "DRIVE:FREQ?" -> Double.toString(frequencyHz);
+            case "DRIVE:AMPL?" -> Double.toString(amplitudeV);
             case "DRIVE:MAX?" -> Double.toString(rig.exciter().maxAmplitudeV());
             case "ACQ:RATE?" -> Double.toString(config.sampleRateHz());
             case "ACQ:CHAN:COUNT?" -> Integer.toString(rig.acquisition().channels().size());

@@ -155,4 +155,23 @@ class SerialFaultTest {
                     + "; expected a command within the watchdog time", e.getMessage());
         }
     }
+
+    @Test
+    void theHandshakeReadsIdentityVersionAndChannelsAndARefusedSettingIsADeviceError() {
+        try (VirtualRigServer server = VirtualRigServer.startOnPty(SerialSweepTest.CONFIG, 921600);
+             SerialRig rig = SerialRig.open(server.hostPath(), quick())) {
+            assertEquals("Tautline Virtual rig, serial SIM-1, firmware 1.0", rig.identity());
+            assertEquals(1, rig.protocolVersion());
+            assertEquals(0, rig.bootCount());
+            assertEquals(20000.0, rig.acquisition().sampleRateHz());
+            assertEquals("force", rig.acquisition().channels().get(0).quantity());
+            assertEquals("displacement", rig.acquisition().channels().get(1).quantity());
+            // Source: 5 N full scale over 2^23 counts of a 24-bit converter (SimulationConfigs.demoWire).
+            assertEquals(5.0 / (1 << 23), rig.sensitivity(0), 0.0);
+            assertEquals(10.0, rig.exciter().maxAmplitudeV());
+            assertEquals(0, rig.acquisition().read(3000).firstSampleIndex());
+            assertEquals(3000, rig.acquisition().nextSampleIndex());
+            assertEquals(0.15, rig.acquisition().rigTimeS(), 1e-15);
+        }
+    }
 }
