@@ -9,6 +9,7 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.tautline.app.qualify.DemoScenario;
 import org.tautline.app.bench.FrfBenchmark;
 import org.tautline.app.bench.ModalBenchmark;
+import org.tautline.driver.serial.SerialBenchmark;
 import org.tautline.driver.sim.SimulatorBenchmark;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -18,7 +19,8 @@ import picocli.CommandLine.Model.CommandSpec;
 /** {@code tautline bench}: benchmarks that print figures; none of them passes or fails on time. */
 @Command(name = "bench", mixinStandardHelpOptions = true,
         description = "Run a benchmark and print its figures.",
-        subcommands = {BenchCommand.Simulator.class, BenchCommand.FrfFromWav.class, BenchCommand.Modal.class})
+        subcommands = {BenchCommand.Simulator.class, BenchCommand.FrfFromWav.class, BenchCommand.Modal.class,
+                BenchCommand.Serial.class})
 final class BenchCommand implements Runnable {
     @Spec
     private CommandSpec spec;
@@ -171,6 +173,42 @@ final class BenchCommand implements Runnable {
                 spec.commandLine().getOut().println(ResultJson.MAPPER.writeValueAsString(f));
             } else {
                 spec.commandLine().getOut().print(ModalBenchmark.text(f));
+            }
+            spec.commandLine().getOut().flush();
+            return 0;
+        }
+    }
+
+    /** {@code tautline bench serial}: block decoding speed and streaming over a pseudo-terminal. */
+    @Command(name = "serial", mixinStandardHelpOptions = true,
+            description = "Decode throughput of the serial block decoder (MB/s, target >= 50), then stream the virtual"
+                    + " rig over a socat pseudo-terminal and count blocks received, lost blocks (target 0) and the"
+                    + " longest stall between blocks.")
+    static final class Serial implements Callable<Integer> {
+        @Spec
+        private CommandSpec spec;
+
+        @Option(names = "--seconds", paramLabel = "S", defaultValue = "60",
+                description = "How long to stream over the pty (default: ${DEFAULT-VALUE}).")
+        private double seconds;
+
+        @Option(names = "--baud", paramLabel = "B", defaultValue = "921600",
+                description = "Line speed (default: ${DEFAULT-VALUE}).")
+        private int baud;
+
+        @Option(names = "--json", description = "Print the figures as JSON.")
+        private boolean json;
+
+        @Override
+        public Integer call() throws Exception {
+            SerialBenchmark.Figures f = SerialBenchmark.run(seconds, baud);
+            if (json) {
+                spec.commandLine().getOut().println(ResultJson.MAPPER.writeValueAsString(f));
+            } else {
+                spec.commandLine().getOut().printf(Locale.ROOT,
+                        "serial: decode %.0f MB/s; %.0f s over a pty at %d baud: %d blocks, %d lost, longest stall %.0f ms%n",
+                        f.decodeMegabytesPerS(), f.linkSeconds(), f.baud(), f.blocksReceived(), f.lostBlocks(),
+                        f.longestStallMs());
             }
             spec.commandLine().getOut().flush();
             return 0;

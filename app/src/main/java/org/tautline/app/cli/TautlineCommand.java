@@ -6,7 +6,7 @@ import picocli.CommandLine.Command;
 @Command(name = "tautline", mixinStandardHelpOptions = true, version = "Tautline 0.1.0",
         description = "Vibration qualification of tensioned strings, wires and belts."
                 + " With no command, opens the workbench window.",
-        subcommands = {DemoCommand.class, FrfCommand.class, FitCommand.class, BenchCommand.class, RigsCommand.class,
+        subcommands = {DemoCommand.class, FrfCommand.class, FitCommand.class, BenchCommand.class, RigsCommand.class, VirtualRigCommand.class,
                 SweepCommand.class, ResumeCommand.class})
 final class TautlineCommand implements Runnable {
     @picocli.CommandLine.Spec

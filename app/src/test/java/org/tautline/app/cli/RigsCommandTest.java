@@ -37,8 +37,8 @@ class RigsCommandTest {
         JsonNode root = ResultJson.MAPPER.readTree(r.out());
         List<String> names = new ArrayList<>();
         root.get("drivers").forEach(d -> names.add(d.get("name").asText()));
-        assertEquals(List.of("replay", "sim"), names);
-        JsonNode sim = root.get("drivers").get(1);
+        assertEquals(List.of("replay", "serial", "sim"), names);
+        JsonNode sim = root.get("drivers").get(2);
         assertEquals("scenario", sim.get("options").get(0).get("name").asText());
         assertEquals("demo-wire", sim.get("options").get(0).get("default").asText());
         JsonNode journal = root.get("drivers").get(0).get("options").get(0);

@@ -54,7 +54,7 @@ class SweepCommandTest {
         CliRun r = CliRun.of("sweep", "--rig", "shaker9", "--from", "150", "--to", "300", "--steps", "9",
                 "--plugins", dir.toString(), "--out", dir.resolve("run").toString());
         assertEquals(1, r.exitCode());
-        assertEquals("tautline: no rig driver is named 'shaker9'; known drivers: replay, sim", r.err().strip());
+        assertEquals("tautline: no rig driver is named 'shaker9'; known drivers: replay, serial, sim", r.err().strip());
         assertFalse(Files.exists(dir.resolve("run")), "nothing was created");
     }
 

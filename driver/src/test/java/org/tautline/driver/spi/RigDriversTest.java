@@ -64,14 +64,14 @@ class RigDriversTest {
     @Test
     void findsTheBuiltInDriversOnTheClassPath() {
         RigDrivers drivers = RigDrivers.load(List.of());
-        assertEquals(List.of("replay", "sim"), drivers.list().stream().map(RigDriver::name).toList());
+        assertEquals(List.of("replay", "serial", "sim"), drivers.list().stream().map(RigDriver::name).toList());
         assertEquals(List.of(), drivers.warnings());
     }
 
     @Test
     void anUnknownNameListsTheKnownDrivers() {
         RigException e = assertThrows(RigException.class, () -> RigDrivers.load(List.of()).find("shaker9"));
-        assertEquals("no rig driver is named 'shaker9'; known drivers: replay, sim", e.getMessage());
+        assertEquals("no rig driver is named 'shaker9'; known drivers: replay, serial, sim", e.getMessage());
     }
 
     @Test
@@ -99,7 +99,7 @@ class RigDriversTest {
             broken.write("com.example.rig.Missing\n".getBytes(StandardCharsets.UTF_8));
         }
         RigDrivers drivers = RigDrivers.load(List.of(plugins, dir.resolve("no-such-folder")));
-        assertEquals(List.of("bench-preset", "replay", "sim"), drivers.list().stream().map(RigDriver::name).toList());
+        assertEquals(List.of("bench-preset", "replay", "serial", "sim"), drivers.list().stream().map(RigDriver::name).toList());
         assertEquals(1, drivers.warnings().size());
         assertTrue(drivers.warnings().get(0).startsWith("a rig driver could not be loaded and is skipped: "
                 + RigDriver.class.getName() + ": Provider com.example.rig.Missing not found"), drivers.warnings().get(0));
