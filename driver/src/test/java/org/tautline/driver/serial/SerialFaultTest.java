@@ -18,6 +18,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.EnumSource;
 import org.tautline.driver.RigLinkException;
 import org.tautline.driver.RigLinkException.Kind;
+import org.tautline.driver.sweep.SweepFaultException;
 import org.tautline.driver.sweep.SteppedSineRunner;
 import org.tautline.driver.sweep.SweepPoint;
 import org.tautline.driver.sweep.SweepRecord;
@@ -72,14 +73,17 @@ class SerialFaultTest {
         List<SweepPoint> seen = new ArrayList<>();
         try (VirtualRigServer server = VirtualRigServer.startOnPty(SerialSweepTest.CONFIG, 921600);
              SerialRig rig = SerialRig.open(server.hostPath(), quick())) {
-            RigLinkException e = assertThrows(RigLinkException.class,
+            SweepFaultException stopped = assertThrows(SweepFaultException.class,
                     () -> new SteppedSineRunner(rig).run(SerialSweepTest.plan(), p -> {
                         seen.add(p.point());
                         if (p.completedSteps() == FAULT_AFTER_STEP) {
                             fault.inject.accept(server);
                         }
                     }, () -> false));
+            assertTrue(stopped.getCause() instanceof RigLinkException, "the sweep names the link fault: " + stopped);
+            RigLinkException e = (RigLinkException) stopped.getCause();
             assertEquals(fault.kind, e.kind(), e.getMessage());
+            assertEquals(seen.size(), stopped.partial().points().size(), "the sweep keeps every completed step");
             assertTrue(e.getMessage().contains(server.hostPath()), e.getMessage());
             SerialRig.FaultRecord record = rig.fault();
             assertNotNull(record);
