@@ -27,6 +27,12 @@ import org.tautline.analysis.frf.FrfQuantity;
 public final class ModalEstimator {
     /** Highest model order of the stabilisation chart. */
     public static final int MAX_ORDER = 64;
+    /**
+     * A fitted mode whose half-power band 2 zeta f is narrower than this fraction of the local line
+     * spacing is left out: the data cannot resolve it, and such a "mode" is how a fit absorbs one
+     * outlying line (a stepped-sine step disturbed by a transient, say).
+     */
+    public static final double UNRESOLVED_FRACTION = 0.5;
     /** Fewest lines in the band that a fit accepts. */
     public static final int MIN_LINES = 12;
     private static final int MIN_ORDER = 2;
@@ -143,9 +149,15 @@ public final class ModalEstimator {
         List<FittedMode> kept = new ArrayList<>();
         for (FittedMode m : modes) {
             double f = m.mode().frequencyHz();
+            double bandwidthHz = 2 * m.mode().dampingRatio() * f;
+            double spacingHz = localSpacingHz(h, f);
             if (f < low || f > high) {
                 warnings.add(String.format(java.util.Locale.ROOT,
                         "a mode refined to %.4g Hz, outside the band %.4g .. %.4g Hz, was left out", f, low, high));
+            } else if (bandwidthHz < UNRESOLVED_FRACTION * spacingHz) {
+                warnings.add(String.format(java.util.Locale.ROOT,
+                        "a mode at %.4g Hz narrower (half-power band %.3g Hz) than half the line spacing (%.3g Hz) was left"
+                                + " out: it cannot be told from a single bad line", f, bandwidthHz, spacingHz));
             } else {
                 kept.add(m);
             }
@@ -215,6 +227,15 @@ public final class ModalEstimator {
             out.add(new FittedMode(m, Double.NaN, Double.NaN, new Complex(Double.NaN, Double.NaN)));
         }
         return out;
+    }
+
+    /** The spacing of the lines around a frequency, Hz. */
+    private static double localSpacingHz(Frf h, double frequencyHz) {
+        int i = 1;
+        while (i < h.size() - 1 && h.frequencyHz(i) < frequencyHz) {
+            i++;
+        }
+        return h.size() < 2 ? Double.POSITIVE_INFINITY : h.frequencyHz(i) - h.frequencyHz(i - 1);
     }
 
     private static int linesIn(Frf h, double low, double high) {
