@@ -16,14 +16,23 @@ import org.tautline.analysis.frf.Frf;
  * whitened residual e_k = (H_k - H_model,k)/sigma_k of a correct model is circular unit-variance noise, so
  * |e_k|^2 is exponential with mean 1 and the sum over {@link #WINDOW} adjacent lines is Gamma(5, 1) distributed
  * (S. M. Kay, Fundamentals of Statistical Signal Processing: Detection Theory, 1998, ch. 2, from memory).
- * P(sum &gt; {@link #THRESHOLD}) is about 4e-9, so over 10^5 windows a false alarm has odds near 4e-4. Where the
- * largest window sum exceeds the threshold, a pole is put at the line of largest residual in it, with the damping
- * ratio of the nearest fitted mode (close modes of one specimen damp alike; a string's two polarisations nearly
- * equally); LSFD and the joint refinement are rerun with all poles. The new model is kept only when the refined
- * cost falls by more than the threshold as well; at most {@link #MAX_ADDED} modes are added. The idea of fitting,
- * inspecting the residual and adding a mode is the usual manual practice (D. J. Ewins, Modal Testing, 2nd ed.
- * 2000, ch. 4, from memory); the thresholds are our choice. Windows within {@link ModeSelection#EDGE_GUARD} of
- * the band edges are not searched.
+ * P(sum &gt; {@link #THRESHOLD}) is about 4e-9, so over 10^5 windows a false alarm has odds near 4e-4.
+ *
+ * <p>Each round ranks the windows whose sum exceeds the threshold, strongest first, keeping a window only where no
+ * stronger peak already ranked would by itself stay above the detection level: a resonance of peak level P and
+ * half-power half-width zeta f keeps |e|^2 above THRESHOLD/WINDOW out to zeta f sqrt(P WINDOW/THRESHOLD - 1) from
+ * its peak (and at least {@link ModalResidualStart#FIRST_LINES}/2 lines). One pole is put at the line of largest
+ * residual in the first window with the damping ratio of the nearest fitted mode (close modes of one specimen damp
+ * alike; a string's two polarisations nearly equally), and LSFD and the joint refinement are rerun with all poles.
+ * The new model is kept when the refinement succeeds and its cost falls by more than the threshold as well. If not,
+ * the pole of {@link ModalResidualStart} (a one-pole fit of the residual around that line) is tried from the same
+ * window, then the next window, up to {@link #TRIES_PER_ROUND} windows. The neighbour's damping goes first because
+ * a local one-pole fit over an unresolved doublet returns one broad pole between its modes. A
+ * round adds one pole only, so a close partner of a found mode waits for the next round's residual. The search
+ * stops when a round adds nothing or {@link #MAX_ADDED} modes have been added. Fitting, inspecting the residual
+ * and adding a mode is the usual manual practice (D. J. Ewins, Modal Testing, 2nd ed. 2000, ch. 4, from memory);
+ * the thresholds are our choice. Windows within {@link ModeSelection#EDGE_GUARD} of the band edges are not
+ * searched.
  */
 final class ModalResidualSearch {
     /** Adjacent lines summed by the detector. */
@@ -32,6 +41,8 @@ final class ModalResidualSearch {
     static final double THRESHOLD = 30;
     /** Most modes added to one fit. */
     static final int MAX_ADDED = 10;
+    /** Residual peaks tried, strongest first, before a round gives up. */
+    static final int TRIES_PER_ROUND = 4;
 
     /**
      * The outcome of a search.
@@ -62,48 +73,76 @@ final class ModalResidualSearch {
         ModalRefinementResult current = fit;
         List<Pole> added = new ArrayList<>();
         while (added.size() < MAX_ADDED) {
-            int peak = strongestWindowPeak(h, variance, current, lowHz + guardHz, highHz - guardHz);
-            if (peak < 0) {
-                break;
+            ModalRefinementResult next = null;
+            for (List<Pole> starts : candidates(h, variance, current, lowHz + guardHz, highHz - guardHz)) {
+                for (Pole pole : starts) {
+                    next = withPole(h, current, pole, options);
+                    if (next != null) {
+                        added.add(pole);
+                        break;
+                    }
+                }
+                if (next != null) {
+                    break;
+                }
             }
-            Pole pole = Pole.of(h.frequencyHz(peak), nearestDamping(current.modes(), h.frequencyHz(peak)));
-            List<Pole> poles = new ArrayList<>();
-            for (FittedMode m : current.modes()) {
-                poles.add(Pole.of(m.mode().frequencyHz(), Math.min(m.mode().dampingRatio(), 0.99)));
-            }
-            poles.add(pole);
-            ModalRefinementResult next;
-            try {
-                LsfdResult start = Lsfd.fit(h, poles, options.lines());
-                next = ModalRefinement.refine(h, start.modes(), start.residualTerms(), options);
-            } catch (AnalysisException e) {
-                break;
-            }
-            if (!(current.cost() - next.cost() > THRESHOLD)) {
+            if (next == null) {
                 break;
             }
             current = next;
-            added.add(pole);
         }
         return new Outcome(current, List.copyOf(added));
     }
 
-    /** The line of largest whitened residual in the window of largest sum above the threshold, or -1. */
-    private static int strongestWindowPeak(Frf h, double[] variance, ModalRefinementResult fit, double fromHz,
-                                           double toHz) {
+    /** The refinement with the pole added, or null when it fails or the cost does not fall by the threshold. */
+    private static ModalRefinementResult withPole(Frf h, ModalRefinementResult current, Pole pole,
+                                                  ModalRefinementOptions options) {
+        List<Pole> poles = new ArrayList<>();
+        for (FittedMode m : current.modes()) {
+            poles.add(Pole.of(m.mode().frequencyHz(), Math.min(m.mode().dampingRatio(), 0.99)));
+        }
+        poles.add(pole);
+        ModalRefinementResult next;
+        try {
+            LsfdResult start = Lsfd.fit(h, poles, options.lines());
+            next = ModalRefinement.refine(h, start.modes(), start.residualTerms(), options);
+        } catch (AnalysisException e) {
+            return null;
+        }
+        return current.cost() - next.cost() > THRESHOLD ? next : null;
+    }
+
+    /** |e_k|^2 of the whitened residual at each line, the residual itself stored in {@code residual}. */
+    private static double[] whitenedSquares(Frf h, double[] variance, List<Mode> modes, ResidualTerms terms,
+                                            Complex[] residual) {
         int n = h.size();
         double[] e2 = new double[n];
         for (int k = 0; k < n; k++) {
             double f = h.frequencyHz(k);
-            Complex model = fit.residualTerms().receptanceAt(f);
-            for (FittedMode m : fit.modes()) {
-                model = model.add(m.mode().receptanceAt(f));
+            Complex model = terms.receptanceAt(f);
+            for (Mode m : modes) {
+                model = model.add(m.receptanceAt(f));
             }
-            e2[k] = h.value(k).subtract(model).norm();
-            e2[k] = variance[k] > 0 ? e2[k] * e2[k] / variance[k] : 0;
+            residual[k] = h.value(k).subtract(model);
+            double norm = residual[k].norm();
+            e2[k] = variance[k] > 0 ? norm * norm / variance[k] : 0;
         }
-        double best = THRESHOLD;
-        int bestStart = -1;
+        return e2;
+    }
+
+    /**
+     * For each separated residual peak above the threshold, strongest first and at most a round's tries, its start
+     * poles in the order tried: the pole at the peak line with the nearest mode's damping, then the local one-pole
+     * fit when that is plausible.
+     */
+    private static List<List<Pole>> candidates(Frf h, double[] variance, ModalRefinementResult fit, double fromHz,
+                                               double toHz) {
+        int n = h.size();
+        double[] f = h.frequenciesHz();
+        Complex[] residual = new Complex[n];
+        List<Mode> modes = fit.modes().stream().map(FittedMode::mode).toList();
+        double[] e2 = whitenedSquares(h, variance, modes, fit.residualTerms(), residual);
+        double[] windowSum = new double[n];
         double sum = 0;
         for (int k = 0; k < n; k++) {
             sum += e2[k];
@@ -111,21 +150,42 @@ final class ModalResidualSearch {
                 sum -= e2[k - WINDOW];
             }
             int start = k - WINDOW + 1;
-            if (start >= 0 && h.frequencyHz(start) >= fromHz && h.frequencyHz(k) <= toHz && sum > best) {
-                best = sum;
-                bestStart = start;
+            if (start >= 0 && f[start] >= fromHz && f[k] <= toHz) {
+                windowSum[start] = sum;
             }
         }
-        if (bestStart < 0) {
-            return -1;
-        }
-        int peak = bestStart;
-        for (int k = bestStart; k < bestStart + WINDOW; k++) {
-            if (e2[k] > e2[peak]) {
-                peak = k;
+        boolean[] taken = new boolean[n];
+        List<List<Pole>> out = new ArrayList<>();
+        while (out.size() < TRIES_PER_ROUND) {
+            int best = -1;
+            for (int s = 0; s + WINDOW <= n; s++) {
+                if (windowSum[s] > THRESHOLD && !taken[s] && !taken[s + WINDOW - 1]
+                        && (best < 0 || windowSum[s] > windowSum[best])) {
+                    best = s;
+                }
+            }
+            if (best < 0) {
+                break;
+            }
+            int peak = best;
+            for (int k = best; k < best + WINDOW; k++) {
+                if (e2[k] > e2[peak]) {
+                    peak = k;
+                }
+            }
+            Pole local = ModalResidualStart.at(f, residual, peak);
+            Pole neighbour = Pole.of(f[peak], nearestDamping(fit.modes(), f[peak]));
+            out.add(local == null ? List.of(neighbour) : List.of(neighbour, local));
+            Pole reach = local == null ? neighbour : local;
+            double reachHz = reach.dampingRatio() * reach.frequencyHz()
+                    * Math.sqrt(Math.max(0, e2[peak] * WINDOW / THRESHOLD - 1));
+            for (int k = 0; k < n; k++) {
+                if (2 * Math.abs(k - peak) <= ModalResidualStart.FIRST_LINES || Math.abs(f[k] - f[peak]) <= reachHz) {
+                    taken[k] = true;
+                }
             }
         }
-        return peak;
+        return out;
     }
 
     private static double nearestDamping(List<FittedMode> modes, double frequencyHz) {
