@@ -154,7 +154,7 @@ public final class ModalEstimator {
             if (f < low || f > high) {
                 warnings.add(String.format(java.util.Locale.ROOT,
                         "a mode refined to %.4g Hz, outside the band %.4g .. %.4g Hz, was left out", f, low, high));
-            } else if (bandwidthHz < UNRESOLVED_FRACTION * spacingHz) {
+            } else if (!isResolved(h, m.mode())) {
                 warnings.add(String.format(java.util.Locale.ROOT,
                         "a mode at %.4g Hz narrower (half-power band %.3g Hz) than half the line spacing (%.3g Hz) was left"
                                 + " out: it cannot be told from a single bad line", f, bandwidthHz, spacingHz));
@@ -227,6 +227,19 @@ public final class ModalEstimator {
             out.add(new FittedMode(m, Double.NaN, Double.NaN, new Complex(Double.NaN, Double.NaN)));
         }
         return out;
+    }
+
+    /**
+     * Whether the lines resolve a mode: its half-power band 2 zeta f is at least
+     * {@value #UNRESOLVED_FRACTION} of the local line spacing.
+     *
+     * @param h the FRF
+     * @param mode the mode
+     * @return true when resolved
+     */
+    static boolean isResolved(Frf h, Mode mode) {
+        double f = mode.frequencyHz();
+        return 2 * mode.dampingRatio() * f >= UNRESOLVED_FRACTION * localSpacingHz(h, f);
     }
 
     /** The spacing of the lines around a frequency, Hz. */

@@ -94,7 +94,12 @@ final class ModalResidualSearch {
         return new Outcome(current, List.copyOf(added));
     }
 
-    /** The refinement with the pole added, or null when it fails or the cost does not fall by the threshold. */
+    /**
+     * The refinement with the pole added, or null when it fails, the cost does not fall by the
+     * threshold, or any mode of the new model is narrower than the data resolve (see
+     * {@link ModalEstimator#isResolved}): a "mode" a few millihertz wide is how a fit absorbs one
+     * disturbed line, not a resonance.
+     */
     private static ModalRefinementResult withPole(Frf h, ModalRefinementResult current, Pole pole,
                                                   ModalRefinementOptions options) {
         List<Pole> poles = new ArrayList<>();
@@ -108,6 +113,11 @@ final class ModalResidualSearch {
             next = ModalRefinement.refine(h, start.modes(), start.residualTerms(), options);
         } catch (AnalysisException e) {
             return null;
+        }
+        for (FittedMode m : next.modes()) {
+            if (!ModalEstimator.isResolved(h, m.mode())) {
+                return null;
+            }
         }
         return current.cost() - next.cost() > THRESHOLD ? next : null;
     }
