@@ -26,9 +26,12 @@ import org.tautline.analysis.frf.Frf;
  * alike; a string's two polarisations nearly equally), and LSFD and the joint refinement are rerun with all poles.
  * The new model is kept when the refinement succeeds and its cost falls by more than the threshold as well. If not,
  * the pole of {@link ModalResidualStart} (a one-pole fit of the residual around that line) is tried from the same
- * window, then the next window, up to {@link #TRIES_PER_ROUND} windows. The neighbour's damping goes first because
- * a local one-pole fit over an unresolved doublet returns one broad pole between its modes. A
- * round adds one pole only, so a close partner of a found mode waits for the next round's residual. The search
+ * window, then that pole together with the local pole of the strongest line within the window's reach but outside
+ * two half-power half-widths of the first (a pair missing together, whose one added pole cannot settle while its
+ * partner's residual pulls at it), then the next window, up to {@link #TRIES_PER_ROUND} windows. The neighbour's
+ * damping goes first because a local one-pole fit over an unresolved doublet returns one broad pole between its
+ * modes. A candidate's refinement gets at most {@link #CANDIDATE_ITERATIONS} iterations. A round adds one pole,
+ * or one pair, so a close partner of a found mode waits for the next round's residual. The search
  * stops when a round adds nothing or {@link #MAX_ADDED} modes have been added. Fitting, inspecting the residual
  * and adding a mode is the usual manual practice (D. J. Ewins, Modal Testing, 2nd ed. 2000, ch. 4, from memory);
  * the thresholds are our choice. Windows within {@link ModeSelection#EDGE_GUARD} of the band edges are not
@@ -43,6 +46,11 @@ final class ModalResidualSearch {
     static final int MAX_ADDED = 10;
     /** Residual peaks tried, strongest first, before a round gives up. */
     static final int TRIES_PER_ROUND = 4;
+    /**
+     * Refinement iterations allowed a candidate model: one that needs more rarely lowers the cost enough to be
+     * kept, and its failures dominated the worst-case time.
+     */
+    static final int CANDIDATE_ITERATIONS = 50;
 
     /**
      * The outcome of a search.
@@ -74,11 +82,11 @@ final class ModalResidualSearch {
         List<Pole> added = new ArrayList<>();
         while (added.size() < MAX_ADDED) {
             ModalRefinementResult next = null;
-            for (List<Pole> starts : candidates(h, variance, current, lowHz + guardHz, highHz - guardHz)) {
-                for (Pole pole : starts) {
-                    next = withPole(h, current, pole, options);
+            for (List<List<Pole>> starts : candidates(h, variance, current, lowHz + guardHz, highHz - guardHz)) {
+                for (List<Pole> poles : starts) {
+                    next = withPoles(h, current, poles, options);
                     if (next != null) {
-                        added.add(pole);
+                        added.addAll(poles);
                         break;
                     }
                 }
@@ -95,22 +103,23 @@ final class ModalResidualSearch {
     }
 
     /**
-     * The refinement with the pole added, or null when it fails, the cost does not fall by the
+     * The refinement with the poles added, or null when it fails, the cost does not fall by the
      * threshold, or any mode of the new model is narrower than the data resolve (see
      * {@link ModalEstimator#isResolved}): a "mode" a few millihertz wide is how a fit absorbs one
      * disturbed line, not a resonance.
      */
-    private static ModalRefinementResult withPole(Frf h, ModalRefinementResult current, Pole pole,
-                                                  ModalRefinementOptions options) {
+    private static ModalRefinementResult withPoles(Frf h, ModalRefinementResult current, List<Pole> extra,
+                                                   ModalRefinementOptions options) {
         List<Pole> poles = new ArrayList<>();
         for (FittedMode m : current.modes()) {
             poles.add(Pole.of(m.mode().frequencyHz(), Math.min(m.mode().dampingRatio(), 0.99)));
         }
-        poles.add(pole);
+        poles.addAll(extra);
         ModalRefinementResult next;
         try {
             LsfdResult start = Lsfd.fit(h, poles, options.lines());
-            next = ModalRefinement.refine(h, start.modes(), start.residualTerms(), options);
+            next = ModalRefinement.refine(h, start.modes(), start.residualTerms(),
+                    options.withMaxIterations(Math.min(options.maxIterations(), CANDIDATE_ITERATIONS)));
         } catch (AnalysisException e) {
             return null;
         }
@@ -141,12 +150,12 @@ final class ModalResidualSearch {
     }
 
     /**
-     * For each separated residual peak above the threshold, strongest first and at most a round's tries, its start
-     * poles in the order tried: the pole at the peak line with the nearest mode's damping, then the local one-pole
-     * fit when that is plausible.
+     * For each separated residual peak above the threshold, strongest first and at most a round's tries, its sets
+     * of start poles in the order tried: the pole at the peak line with the nearest mode's damping, then the local
+     * one-pole fit when that is plausible, then that pole with its partner when one stands out.
      */
-    private static List<List<Pole>> candidates(Frf h, double[] variance, ModalRefinementResult fit, double fromHz,
-                                               double toHz) {
+    private static List<List<List<Pole>>> candidates(Frf h, double[] variance, ModalRefinementResult fit, double fromHz,
+                                                     double toHz) {
         int n = h.size();
         double[] f = h.frequenciesHz();
         Complex[] residual = new Complex[n];
@@ -165,7 +174,7 @@ final class ModalResidualSearch {
             }
         }
         boolean[] taken = new boolean[n];
-        List<List<Pole>> out = new ArrayList<>();
+        List<List<List<Pole>>> out = new ArrayList<>();
         while (out.size() < TRIES_PER_ROUND) {
             int best = -1;
             for (int s = 0; s + WINDOW <= n; s++) {
@@ -185,10 +194,19 @@ final class ModalResidualSearch {
             }
             Pole local = ModalResidualStart.at(f, residual, peak);
             Pole neighbour = Pole.of(f[peak], nearestDamping(fit.modes(), f[peak]));
-            out.add(local == null ? List.of(neighbour) : List.of(neighbour, local));
             Pole reach = local == null ? neighbour : local;
             double reachHz = reach.dampingRatio() * reach.frequencyHz()
                     * Math.sqrt(Math.max(0, e2[peak] * WINDOW / THRESHOLD - 1));
+            List<List<Pole>> starts = new ArrayList<>();
+            starts.add(List.of(neighbour));
+            if (local != null) {
+                starts.add(List.of(local));
+                Pole partner = partner(f, e2, residual, local, reachHz);
+                if (partner != null) {
+                    starts.add(List.of(local, partner));
+                }
+            }
+            out.add(starts);
             for (int k = 0; k < n; k++) {
                 if (2 * Math.abs(k - peak) <= ModalResidualStart.FIRST_LINES || Math.abs(f[k] - f[peak]) <= reachHz) {
                     taken[k] = true;
@@ -196,6 +214,27 @@ final class ModalResidualSearch {
             }
         }
         return out;
+    }
+
+    /**
+     * The local pole of the strongest residual line within reach of a local pole but outside two of its half-power
+     * half-widths, or null when no line there is above the detection level: the partner of a missing pair.
+     */
+    private static Pole partner(double[] f, double[] e2, Complex[] residual, Pole local, double reachHz) {
+        double centreHz = local.frequencyHz();
+        double clearHz = 2 * local.dampingRatio() * centreHz;
+        int best = -1;
+        for (int k = 0; k < f.length; k++) {
+            double d = Math.abs(f[k] - centreHz);
+            if (d > clearHz && d <= reachHz && e2[k] > THRESHOLD / WINDOW && (best < 0 || e2[k] > e2[best])) {
+                best = k;
+            }
+        }
+        if (best < 0) {
+            return null;
+        }
+        Pole p = ModalResidualStart.at(f, residual, best);
+        return p == null || Math.abs(p.frequencyHz() - centreHz) <= clearHz ? null : p;
     }
 
     private static double nearestDamping(List<FittedMode> modes, double frequencyHz) {

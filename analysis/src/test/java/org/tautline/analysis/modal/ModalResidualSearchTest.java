@@ -59,4 +59,26 @@ class ModalResidualSearchTest {
                     "seed " + seed + ": the full model leaves only noise");
         }
     }
+
+    @Test
+    void addsBothModesOfAPairTheFitLeftOut() {
+        // A pair 2.6 half-power bandwidths apart (zeta 0.002 near 105 Hz: 0.42 Hz), equally strong, neither fitted.
+        List<Mode> truth = List.of(new Mode(90, 0.003, new Complex(2000)), new Mode(105, 0.002, new Complex(800)),
+                new Mode(106.1, 0.002, new Complex(800)));
+        ModalRefinementOptions options = ModalRefinementOptions.defaults().withRealModes(true).withUpperResidual(true)
+                .withLowerResidual(true);
+        for (long seed = 1; seed <= 3; seed++) {
+            Frf h = doublet(seed, truth);
+            ModalRefinementResult one = refine(h, truth.subList(0, 1), options);
+            ModalResidualSearch.Outcome found = ModalResidualSearch.search(h, 80, 120, one, options);
+            List<FittedMode> modes = found.refined().modes().stream()
+                    .sorted(java.util.Comparator.comparingDouble(m -> m.mode().frequencyHz())).toList();
+            assertEquals(3, modes.size(), "seed " + seed + ": the pair, and only it, added to " + modes);
+            for (int r = 1; r < 3; r++) {
+                double z = (modes.get(r).mode().frequencyHz() - truth.get(r).frequencyHz()) / modes.get(r).frequencyStdHz();
+                assertTrue(Math.abs(z) < 5, "seed " + seed + ": mode " + modes.get(r).mode() + " is " + z
+                        + " standard errors from " + truth.get(r));
+            }
+        }
+    }
 }
