@@ -128,7 +128,7 @@ final class CsvCells {
      *
      * @param text the text
      * @return the text in single quotes, cut to a readable length, with control and line-separator
-     *         characters shown as \\uXXXX
+     *         characters shown as \\uhhhh (four hex digits)
      */
     static String quoted(String text) {
         StringBuilder out = new StringBuilder(Math.min(text.length(), MAX_QUOTED_CHARS) + 8).append('\'');

@@ -17,6 +17,7 @@ import org.tautline.driver.spi.RigDrivers;
 import org.tautline.driver.sweep.SweepRecord;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -38,8 +39,8 @@ final class ResumeCommand implements Callable<Integer> {
     @Option(names = "--no-progress", description = "Do not draw the progress bar.")
     private boolean noProgress;
 
-    @Option(names = "--plugins", paramLabel = "DIR", description = "Load driver plugins from the jar files in DIR (repeatable).")
-    private List<Path> plugins = new ArrayList<>();
+    @Mixin
+    private PluginFolders plugins;
 
     @Override
     public Integer call() throws IOException {
@@ -49,7 +50,7 @@ final class ResumeCommand implements Callable<Integer> {
             throw new IllegalArgumentException(runDir + " holds no journal (" + journal + "); give the folder a"
                     + " 'tautline sweep --out' made");
         }
-        RigDrivers drivers = SweepCommand.drivers(plugins, err);
+        RigDrivers drivers = plugins.drivers(err);
         JournalContents contents = JournalReader.read(journal);
         if (!contents.allStepsDone()) {
             err.print(SafetyNotice.asText("sim".equals(contents.header().driver())));

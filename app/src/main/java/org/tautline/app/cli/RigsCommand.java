@@ -14,6 +14,7 @@ import org.tautline.driver.spi.RigDrivers;
 import org.tautline.driver.spi.RigOption;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
@@ -24,10 +25,8 @@ final class RigsCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
 
-    @Option(names = "--plugins", paramLabel = "DIR",
-            description = "Load driver plugins from the jar files in DIR (repeatable). Default: the folders of the"
-                    + " tautline.plugins system property, else ~/.tautline/plugins.")
-    private List<Path> plugins = new ArrayList<>();
+    @Mixin
+    private PluginFolders plugins;
 
     @Option(names = "--json", description = "Print the drivers and ports as JSON.")
     private boolean json;
@@ -35,7 +34,7 @@ final class RigsCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
-        RigDrivers drivers = SweepCommand.drivers(plugins, spec.commandLine().getErr());
+        RigDrivers drivers = plugins.drivers(spec.commandLine().getErr());
         List<String[]> ports = serialPorts();
         if (json) {
             out.println(ResultJson.MAPPER.writeValueAsString(asJson(drivers, ports)));

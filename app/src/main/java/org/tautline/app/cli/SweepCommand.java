@@ -30,6 +30,7 @@ import org.tautline.driver.sweep.SweepListener;
 import org.tautline.driver.sweep.SweepRecord;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
@@ -90,8 +91,8 @@ final class SweepCommand implements Callable<Integer> {
     @Option(names = "--no-progress", description = "Do not draw the progress bar.")
     private boolean noProgress;
 
-    @Option(names = "--plugins", paramLabel = "DIR", description = "Load driver plugins from the jar files in DIR (repeatable).")
-    private List<Path> plugins = new ArrayList<>();
+    @Mixin
+    private PluginFolders plugins;
 
     @Override
     public Integer call() throws IOException {
@@ -102,7 +103,7 @@ final class SweepCommand implements Callable<Integer> {
             given.put("port", rig.substring("serial:".length()));
         }
         SteppedSinePlan plan = new SteppedSinePlan(fromHz, toHz, steps, settleCycles, 0.02, cycles, driveV, rampS, 3);
-        RigDrivers drivers = drivers(plugins, err);
+        RigDrivers drivers = plugins.drivers(err);
         drivers.find(driver);
         Path journal = runDir.resolve(JOURNAL);
         if (Files.exists(journal)) {
@@ -119,13 +120,6 @@ final class SweepCommand implements Callable<Integer> {
 
     static SweepListener progress(boolean noProgress) {
         return noProgress ? SweepListener.NONE : new ProgressBar(System.err, System.console() != null).sweep();
-    }
-
-    /** The drivers of the class path and the plugins folders given, or the default folders when none is given. */
-    static RigDrivers drivers(List<Path> plugins, PrintWriter err) {
-        RigDrivers drivers = plugins.isEmpty() ? RigDrivers.standard() : RigDrivers.load(plugins);
-        drivers.warnings().forEach(w -> err.println("tautline: warning: " + w));
-        return drivers;
     }
 
     static Map<String, String> parseOptions(List<String> options) {

@@ -8,7 +8,7 @@ import java.util.Map;
 import java.util.zip.CRC32;
 
 /**
- * One journal record as a line of text: {@code TYPE key=value ... crc=XXXXXXXX}, see {@link JournalWriter}.
+ * One journal record as a line of text: {@code TYPE key=value ... crc=HHHHHHHH}, see {@link JournalWriter}.
  *
  * @param type the record type, upper case
  * @param fields key to value, in the order written

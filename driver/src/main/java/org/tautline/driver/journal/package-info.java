@@ -3,7 +3,7 @@
  *
  * <h2>Journal file</h2>
  * Text, US-ASCII, one record per line ending in a line feed (0x0A):
- * <pre>TYPE key=value key=value ... crc=XXXXXXXX</pre>
+ * <pre>TYPE key=value key=value ... crc=HHHHHHHH</pre>
  * {@code crc} is the CRC-32 (the ISO-HDLC polynomial of {@link java.util.zip.CRC32}) of every byte of
  * the line before {@code " crc="}, as eight upper-case hex digits. Values are percent-encoded: every
  * UTF-8 byte other than letters, digits and {@code . _ , : + - /} is written {@code %XX}, so values
