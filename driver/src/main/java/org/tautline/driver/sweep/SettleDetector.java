@@ -58,7 +58,8 @@ public final class SettleDetector {
     /**
      * Feeds the next block's phasor.
      *
-     * @param phasor the block's value (an FRF value or a channel phasor)
+     * @param phasor the block's value: an FRF value (a ratio, free of the time origin), or a channel phasor
+     *        referred to one time origin for all blocks
      * @param phasorStd standard error of the phasor's magnitude (0 for noise-free data)
      * @param blockS the block's length, s
      * @return the state after this block

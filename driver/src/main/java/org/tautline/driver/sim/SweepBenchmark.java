@@ -1,0 +1,200 @@
+package org.tautline.driver.sim;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.tautline.analysis.AnalysisException;
+import org.tautline.analysis.modal.FittedMode;
+import org.tautline.analysis.modal.ModalEstimator;
+import org.tautline.driver.sweep.AdaptivePass;
+import org.tautline.driver.sweep.AdaptiveSweepPlan;
+import org.tautline.driver.sweep.AdaptiveSweepResult;
+import org.tautline.driver.sweep.AdaptiveSweepRunner;
+import org.tautline.driver.sweep.LevelMode;
+import org.tautline.driver.sweep.SafetyLimits;
+import org.tautline.driver.sweep.SteppedSinePlan;
+import org.tautline.driver.sweep.SteppedSineRunner;
+import org.tautline.driver.sweep.SweepDirection;
+import org.tautline.driver.sweep.SweepJournal;
+import org.tautline.driver.sweep.SweepListener;
+import org.tautline.driver.sweep.SweepPoint;
+import org.tautline.driver.sweep.SweepRecord;
+
+/**
+ * Rig time of the adaptive sweep against a uniform log-spaced stepped sine tuned to the same accuracy, and a lower bound.
+ *
+ * <p>The specimen is the demo wire with its two polarisations at one frequency (a single mode per
+ * harmonic) and 8 harmonics, swept 150-1600 Hz at 1 V: seven modes, zeta about 0.33 %. Accuracy is the
+ * largest true error over the seven modes, from {@link SimulationTruth}: |f - f_true|/f_true and
+ * |zeta - zeta_true|/zeta_true. The goal is twice the plan's standard-error targets (a two-sigma
+ * criterion). The uniform sweep is the plain {@link SteppedSineRunner} with a fixed settle time; its
+ * step count and settle time are searched (settle 4.6, 2, 1 and 0.5 tau of the slowest mode, steps on a
+ * ladder) and the cheapest pair whose whole-band modal fit meets the goal is reported. The lower bound
+ * is the adaptive sweep's own steps, each charged only 4.6 tau of the nearest true mode (the settle time
+ * to 1 %, common practice), with no integration and no ramps.
+ */
+public final class SweepBenchmark {
+    /** Band of the benchmark, Hz. */
+    public static final double LOW_HZ = 150.0;
+    /** Band of the benchmark, Hz. */
+    public static final double HIGH_HZ = 1600.0;
+    private static final double FREQUENCY_STD_TARGET = 5e-6;
+    private static final double DAMPING_STD_TARGET = 0.005;
+    private static final int INTEGRATION_CYCLES = 64;
+    private static final int[] STEP_LADDER = {300, 450, 700, 1000, 1500, 2200, 3300, 5000};
+    private static final double[] SETTLE_TAUS = {4.6, 2.0, 1.0, 0.5};
+
+    private SweepBenchmark() {
+    }
+
+    /**
+     * The figures.
+     *
+     * @param adaptiveRigTimeS rig time of the adaptive sweep, s
+     * @param uniformRigTimeS rig time of the cheapest uniform sweep meeting the goal, s (NaN if none did)
+     * @param lowerBoundRigTimeS the settle-time lower bound, s
+     * @param uniformToAdaptive uniform / adaptive rig time
+     * @param adaptiveToLowerBound adaptive rig time / lower bound
+     * @param adaptiveSteps steps of the adaptive sweep
+     * @param uniformSteps steps of the chosen uniform sweep
+     * @param uniformSettleS fixed settle time of the chosen uniform sweep, s
+     * @param frequencyGoal relative f error both must reach
+     * @param dampingGoal relative zeta error both must reach
+     * @param adaptiveFrequencyError largest relative f error reached by the adaptive sweep
+     * @param adaptiveDampingError largest relative zeta error reached by the adaptive sweep
+     * @param uniformFrequencyError largest relative f error reached by the chosen uniform sweep
+     * @param uniformDampingError largest relative zeta error reached by the chosen uniform sweep
+     * @param uniformTrials uniform sweeps tried in the search
+     * @param wallTimeS wall time of the whole benchmark, s
+     */
+    public record Figures(double adaptiveRigTimeS, double uniformRigTimeS, double lowerBoundRigTimeS,
+                          double uniformToAdaptive, double adaptiveToLowerBound, int adaptiveSteps, int uniformSteps,
+                          double uniformSettleS, double frequencyGoal, double dampingGoal,
+                          double adaptiveFrequencyError, double adaptiveDampingError, double uniformFrequencyError,
+                          double uniformDampingError, int uniformTrials, double wallTimeS) {
+    }
+
+    /** @return the benchmark's specimen: the demo wire, one polarisation frequency per harmonic, 8 harmonics */
+    public static SimulationConfig specimen() {
+        SimulationConfig demo = SimulationConfigs.demoWire();
+        SimulatedSpecimen s = demo.specimen();
+        return demo.withSpecimen(new SimulatedSpecimen(s.lengthM(), s.linearDensityKgPerM(), s.tensionN(),
+                s.bendingStiffnessNm2(), s.ends(), 8, s.damping(), 0.0, s.polarisationAngleRad(),
+                s.geometricNonlinearity(), s.axialStiffnessN()));
+    }
+
+    /** @return the adaptive plan the benchmark runs */
+    public static AdaptiveSweepPlan plan() {
+        return new AdaptiveSweepPlan(LOW_HZ, HIGH_HZ, LevelMode.DRIVE, List.of(1.0), FREQUENCY_STD_TARGET,
+                DAMPING_STD_TARGET, new SafetyLimits(5.0, 4.0, 9e-4, 9e-4), SweepDirection.UP, 1800.0, 35, 0.002, 0.01,
+                INTEGRATION_CYCLES, 0.0, 0.01, 1.0, 20.0, 0.1, 1);
+    }
+
+    /** @return the figures */
+    public static Figures run() {
+        long t0 = System.nanoTime();
+        SimulationConfig config = specimen();
+        List<TrueMode> truth = modesInBand(SimulationTruth.of(config));
+        AdaptiveSweepPlan plan = plan();
+        double fGoal = 2 * plan.frequencyRelStd();
+        double zGoal = 2 * plan.dampingRelStd();
+        AdaptiveSweepResult adaptive = new AdaptiveSweepRunner(new SimulatedRig(config)).run(plan,
+                e -> { }, () -> false, SweepJournal.NONE);
+        AdaptivePass pass = adaptive.passes().get(0);
+        double[] adaptiveError = errors(pass.modes(), truth);
+        double lowerBound = 0;
+        for (SweepPoint p : pass.points()) {
+            lowerBound += Math.log(100.0) * tauOfNearest(truth, p.frequencyHz());
+        }
+        double slowestTauS = 0;
+        for (TrueMode m : truth) {
+            slowestTauS = Math.max(slowestTauS, tau(m));
+        }
+        double bestTime = Double.NaN;
+        int bestSteps = 0;
+        double bestSettle = Double.NaN;
+        double[] bestError = {Double.NaN, Double.NaN};
+        int trials = 0;
+        for (double settleTaus : SETTLE_TAUS) {
+            double settleS = settleTaus * slowestTauS;
+            for (int steps : STEP_LADDER) {
+                SteppedSinePlan uniform = new SteppedSinePlan(LOW_HZ, HIGH_HZ, steps, 0.0, settleS, INTEGRATION_CYCLES,
+                        1.0, plan.rampS(), 1);
+                double planned = uniform.plannedRigTimeS(config.sampleRateHz());
+                if (planned >= bestTime) {
+                    break;
+                }
+                trials++;
+                SweepRecord record = new SteppedSineRunner(new SimulatedRig(config)).run(uniform, SweepListener.NONE,
+                        () -> false);
+                double[] e = errors(wholeBandFit(record), truth);
+                if (e[0] <= fGoal && e[1] <= zGoal) {
+                    bestTime = record.rigTimeS();
+                    bestSteps = steps;
+                    bestSettle = settleS;
+                    bestError = e;
+                    break;
+                }
+            }
+        }
+        return new Figures(adaptive.rigTimeS(), bestTime, lowerBound, bestTime / adaptive.rigTimeS(),
+                adaptive.rigTimeS() / lowerBound, pass.points().size(), bestSteps, bestSettle, fGoal, zGoal,
+                adaptiveError[0], adaptiveError[1], bestError[0], bestError[1], trials, (System.nanoTime() - t0) * 1e-9);
+    }
+
+    private static List<FittedMode> wholeBandFit(SweepRecord record) {
+        try {
+            return ModalEstimator.defaults().withBand(LOW_HZ, HIGH_HZ).estimate(record.toFrf()).modes();
+        } catch (AnalysisException e) {
+            return List.of();
+        }
+    }
+
+    /** One true mode per harmonic in the band (the benchmark specimen's polarisations share a frequency). */
+    private static List<TrueMode> modesInBand(SimulationTruth truth) {
+        List<TrueMode> modes = new ArrayList<>();
+        for (TrueMode m : truth.modes()) {
+            double f = m.mode().frequencyHz();
+            if (m.polarisation() == 1 && f > LOW_HZ && f < HIGH_HZ) {
+                modes.add(m);
+            }
+        }
+        return modes;
+    }
+
+    private static double tau(TrueMode m) {
+        return 1.0 / (m.mode().dampingRatio() * m.mode().angularFrequencyRadPerS());
+    }
+
+    private static double tauOfNearest(List<TrueMode> truth, double f) {
+        TrueMode nearest = truth.get(0);
+        for (TrueMode m : truth) {
+            if (Math.abs(Math.log(m.mode().frequencyHz() / f)) < Math.abs(Math.log(nearest.mode().frequencyHz() / f))) {
+                nearest = m;
+            }
+        }
+        return tau(nearest);
+    }
+
+    /** Largest relative f and zeta errors over the true modes; infinite when a mode was not found within 2 bandwidths. */
+    static double[] errors(List<FittedMode> fitted, List<TrueMode> truth) {
+        double fError = 0;
+        double zError = 0;
+        for (TrueMode t : truth) {
+            double ft = t.mode().frequencyHz();
+            double zt = t.mode().dampingRatio();
+            FittedMode best = null;
+            for (FittedMode m : fitted) {
+                if (best == null || Math.abs(m.mode().frequencyHz() - ft) < Math.abs(best.mode().frequencyHz() - ft)) {
+                    best = m;
+                }
+            }
+            if (best == null || Math.abs(best.mode().frequencyHz() - ft) > 4 * zt * ft) {
+                return new double[] {Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY};
+            }
+            fError = Math.max(fError, Math.abs(best.mode().frequencyHz() - ft) / ft);
+            zError = Math.max(zError, Math.abs(best.mode().dampingRatio() - zt) / zt);
+        }
+        return new double[] {fError, zError};
+    }
+}
