@@ -163,6 +163,7 @@ public final class AdaptiveSweepRunner {
                 }
             }
             executor.rampDrive(0.0, plan.rampS());
+            rig.exciter().setOutputEnabled(false);
             return finish(modes, allMet);
         }
 
