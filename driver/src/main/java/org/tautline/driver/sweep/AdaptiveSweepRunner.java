@@ -63,7 +63,9 @@ public final class AdaptiveSweepRunner {
         try {
             for (double level : plan.levels()) {
                 for (SweepDirection direction : plan.passes()) {
-                    current = new PassRun(plan, level, direction, quantity, listener, cancelRequested, journal);
+                    int stepsSoFar = passes.stream().mapToInt(p -> p.points().size()).sum();
+                    current = new PassRun(plan, level, direction, quantity, listener, cancelRequested, journal,
+                            stepsSoFar);
                     passes.add(current.run());
                     current = null;
                 }
@@ -105,10 +107,12 @@ public final class AdaptiveSweepRunner {
         private final List<String> warnings = new ArrayList<>();
         private double settleS;
         private int plannedSteps;
+        private final int firstIndex;
         private String phase = "coarse";
 
         PassRun(AdaptiveSweepPlan plan, double level, SweepDirection direction, String quantity,
-                SweepEventListener listener, BooleanSupplier cancel, SweepJournal journal) {
+                SweepEventListener listener, BooleanSupplier cancel, SweepJournal journal, int firstIndex) {
+            this.firstIndex = firstIndex;
             this.plan = plan;
             this.level = level;
             this.direction = direction;
@@ -212,7 +216,7 @@ public final class AdaptiveSweepRunner {
             int index = points.size();
             double etaS = Math.max(0, plannedSteps - index) * (Math.log(1 / plan.settleTolerance()) * tau
                     + plan.integrationCycles() / f);
-            StepOutcome outcome = executor.run(index, f, tau, controller, originS,
+            StepOutcome outcome = executor.run(firstIndex + index, f, tau, controller, originS,
                     state -> listener.onEvent(new SweepEvent(phase, level, direction, index, plannedSteps, f, state,
                             elapsedS(), etaS, false, null)));
             journal.stepCompleted(outcome.step());

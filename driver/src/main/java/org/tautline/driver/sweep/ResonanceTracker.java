@@ -15,16 +15,17 @@ import org.tautline.analysis.modal.ModalEstimator;
  * <p>Spacing follows the half-power bandwidth 2 zeta f_r, the width over which the FRF of a mode carries
  * its information about f_r and zeta (D. J. Ewins, Modal Testing: Theory, Practice and Application, 2nd ed.,
  * Research Studies Press 2000, ch. 4, from memory). The first refinement places steps a quarter of a
- * bandwidth apart over +-2.5 bandwidths; each further round halves the spacing over +-2 bandwidths, until
+ * bandwidth apart over +-1.5 bandwidths; further rounds halve the spacing (to a sixteenth at most) over
+ * +-1 bandwidth, where the phase of the FRF turns and the information on f_r and zeta lies, until
  * the local modal fit's standard errors meet the targets. Before a fit exists the bandwidth comes from
  * the plan's initial damping ratio; the peak is first located by steps of half a bandwidth around the
  * first guess, extended until the largest response lies inside them.
  */
 final class ResonanceTracker {
     /** Half-width of the local fit band, in bandwidths. */
-    static final double FIT_HALF_WIDTH_BANDWIDTHS = 3.0;
+    static final double FIT_HALF_WIDTH_BANDWIDTHS = 4.0;
     /** Updates (locating and refining) before a resonance is given up. */
-    static final int MAX_UPDATES = 10;
+    static final int MAX_UPDATES = 6;
 
     private double frequencyHz;
     private double dampingRatio;
@@ -81,12 +82,9 @@ final class ResonanceTracker {
         if (!located) {
             spacing = b / 2;
             halfWidth = 2 * b;
-        } else if (round == 0) {
-            spacing = b / 4;
-            halfWidth = 2.5 * b;
         } else {
-            spacing = b / (4 << Math.min(round, 4));
-            halfWidth = 2 * b;
+            spacing = b / (4 << Math.min(round, 2));
+            halfWidth = round == 0 ? 1.5 * b : b;
         }
         List<Double> batch = new ArrayList<>();
         int k = (int) Math.floor(halfWidth / spacing);
