@@ -4,7 +4,6 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.time.Clock;
 import java.util.LinkedHashMap;
 import java.util.Locale;
 import java.util.Map;
@@ -14,8 +13,6 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.tautline.analysis.frf.FrfCsvWriter;
 import org.tautline.analysis.modal.FittedMode;
 import org.tautline.app.SafetyNotice;
-import org.tautline.driver.journal.JournalHeader;
-import org.tautline.driver.journal.JournalWriter;
 import org.tautline.driver.spi.Rig;
 import org.tautline.driver.spi.RigDriver;
 import org.tautline.driver.spi.RigDrivers;
@@ -24,16 +21,14 @@ import org.tautline.driver.sweep.AdaptivePass;
 import org.tautline.driver.sweep.AdaptiveSweepPlan;
 import org.tautline.driver.sweep.AdaptiveSweepResult;
 import org.tautline.driver.sweep.AdaptiveSweepRunner;
-import org.tautline.driver.sweep.SteppedSinePlan;
 import org.tautline.driver.sweep.SweepEventListener;
 import org.tautline.driver.sweep.SweepStatus;
 
 /**
  * {@code tautline sweep --plan PLAN.json}: the adaptive engine on any rig, journaling every step.
  *
- * <p>The journal's header describes the coarse pass as a stepped-sine plan (the journal format has no
- * adaptive plan yet), so {@code tautline resume} refuses a journal with refinement steps in it rather
- * than continuing it as a uniform sweep.
+ * <p>Steps and the ending go to {@code RUNDIR/adaptive-journal.jsonl} ({@link AdaptiveJournalFile});
+ * {@code tautline resume} does not continue an adaptive sweep.
  */
 final class AdaptiveSweepCommand {
     private AdaptiveSweepCommand() {
@@ -43,7 +38,7 @@ final class AdaptiveSweepCommand {
                    Path runDir, boolean json, boolean noProgress, PrintWriter out, PrintWriter err) throws IOException {
         RigDriver driver = drivers.find(driverName);
         Map<String, String> complete = RigOptionValues.of(driver, options).asMap();
-        Path journal = runDir.resolve(SweepCommand.JOURNAL);
+        Path journal = runDir.resolve(AdaptiveJournalFile.NAME);
         if (Files.exists(journal)) {
             throw new IllegalArgumentException(runDir + " already holds a journal; choose another --out");
         }
@@ -51,13 +46,8 @@ final class AdaptiveSweepCommand {
         err.print(SafetyNotice.asText("sim".equals(driverName)));
         err.flush();
         AdaptiveSweepResult result;
-        try (Rig rig = driver.open(complete)) {
-            SteppedSinePlan coarse = new SteppedSinePlan(plan.startHz(), plan.stopHz(), plan.coarseStepCount(), 0.0,
-                    0.0, plan.integrationCycles(), plan.initialDriveV(), plan.rampS(), plan.harmonicOrder());
-            JournalHeader header = new JournalHeader(JournalHeader.FORMAT_VERSION, Clock.systemUTC().instant(),
-                    driverName, complete, rig.identity(), rig.acquisition().sampleRateHz(), rig.acquisition().channels(),
-                    coarse, "");
-            try (JournalWriter writer = JournalWriter.create(journal, header, Clock.systemUTC())) {
+        try (Rig rig = driver.open(complete); AdaptiveJournalFile writer = new AdaptiveJournalFile(journal)) {
+            {
                 result = SweepCommand.runInterruptibly(cancel -> new AdaptiveSweepRunner(rig).run(plan,
                         SweepEventListener.completedSteps(SweepCommand.progress(noProgress)), cancel, writer),
                         runDir, err);

@@ -32,6 +32,7 @@ final class ResonanceTracker {
     private boolean located;
     private int round;
     private int updates;
+    private int failedFits;
     private Optional<FittedMode> fit = Optional.empty();
     private String lastFitProblem = "";
 
@@ -125,8 +126,9 @@ final class ResonanceTracker {
             return false;
         }
         round++;
-        double low = frequencyHz - FIT_HALF_WIDTH_BANDWIDTHS * b;
-        double high = frequencyHz + FIT_HALF_WIDTH_BANDWIDTHS * b;
+        // A fit that finds nothing (a close pair of modes, a first bandwidth guessed too wide) tries a wider band next.
+        double low = frequencyHz - FIT_HALF_WIDTH_BANDWIDTHS * (1 + failedFits) * b;
+        double high = frequencyHz + FIT_HALF_WIDTH_BANDWIDTHS * (1 + failedFits) * b;
         try {
             List<FittedMode> modes = ModalEstimator.defaults().withBand(low, high).estimate(frf).modes();
             FittedMode nearest = null;
@@ -137,7 +139,8 @@ final class ResonanceTracker {
                 }
             }
             if (nearest == null || Math.abs(nearest.mode().frequencyHz() - frequencyHz) > 2 * b) {
-                lastFitProblem = "no mode found in " + low + " .. " + high + " Hz";
+                lastFitProblem = String.format(java.util.Locale.ROOT, "no mode found in %.2f .. %.2f Hz", low, high);
+                failedFits++;
                 return false;
             }
             fit = Optional.of(nearest);
@@ -147,6 +150,7 @@ final class ResonanceTracker {
                     && nearest.dampingRatioStd() / nearest.mode().dampingRatio() <= dampingRelStd;
         } catch (AnalysisException e) {
             lastFitProblem = e.getMessage();
+            failedFits++;
             return false;
         }
     }
