@@ -12,7 +12,6 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 import org.tautline.driver.RigException;
 import org.tautline.driver.sim.SimulatedRig;
-import org.tautline.driver.sim.SweepBenchmark;
 
 /**
  * Safety limits, cancel and the way the drive is brought down, on the simulated wire around its first mode (228 Hz).
@@ -37,7 +36,7 @@ class AdaptiveSweepSafetyTest {
             "specimen displacement, 10, 4, 9e-4, 4.5e-5"})
     void eachMeasuredLimitTripsWithinOneBlockAndRampsDown(String what, double driveV, double forceN, double response,
                                                            double displacementM) {
-        RecordingRig rig = new RecordingRig(new SimulatedRig(SweepBenchmark.specimen()));
+        RecordingRig rig = new RecordingRig(new SimulatedRig(SweepFixtures.singlePolarisationWire()));
         RecordingJournal journal = new RecordingJournal();
         SafetyLimits limits = new SafetyLimits(driveV, forceN, response, displacementM);
         AdaptiveSweepResult result = new AdaptiveSweepRunner(rig).run(plan(limits), SweepEventListener.NONE,
@@ -68,7 +67,7 @@ class AdaptiveSweepSafetyTest {
 
     @Test
     void aCancelMidStepLeavesTheOutputOffAndTheJournalConsistent() {
-        RecordingRig rig = new RecordingRig(new SimulatedRig(SweepBenchmark.specimen()));
+        RecordingRig rig = new RecordingRig(new SimulatedRig(SweepFixtures.singlePolarisationWire()));
         rig.readsBeforeCancel = 30;
         RecordingJournal journal = new RecordingJournal();
         AdaptiveSweepResult result = new AdaptiveSweepRunner(rig).run(plan(SweepFixtures.wideLimits()),

@@ -7,7 +7,6 @@ import java.util.List;
 
 import org.junit.jupiter.api.Test;
 import org.tautline.driver.sim.SimulatedRig;
-import org.tautline.driver.sim.SweepBenchmark;
 
 /**
  * Force-level control across the first resonance of the simulated wire, where the heavy shaker armature nearly
@@ -26,7 +25,7 @@ class LevelControlTest {
     @Test
     void holdsTheTargetForceWithinTwoPercentAcrossTheResonance() {
         double targetN = 0.005;
-        AdaptiveSweepResult result = new AdaptiveSweepRunner(new SimulatedRig(SweepBenchmark.specimen())).run(
+        AdaptiveSweepResult result = new AdaptiveSweepRunner(new SimulatedRig(SweepFixtures.singlePolarisationWire())).run(
                 plan(targetN, 5.0), SweepEventListener.NONE, () -> false, SweepJournal.NONE);
         assertEquals(SweepStatus.COMPLETED, result.status(), result.reason());
         AdaptivePass pass = result.passes().get(0);
@@ -47,7 +46,7 @@ class LevelControlTest {
     @Test
     void warnsWhereTheDriveLimitCannotReachTheLevel() {
         double targetN = 0.005;
-        AdaptiveSweepResult result = new AdaptiveSweepRunner(new SimulatedRig(SweepBenchmark.specimen())).run(
+        AdaptiveSweepResult result = new AdaptiveSweepRunner(new SimulatedRig(SweepFixtures.singlePolarisationWire())).run(
                 plan(targetN, 2.0), SweepEventListener.NONE, () -> false, SweepJournal.NONE);
         AdaptivePass pass = result.passes().get(0);
         assertTrue(pass.warnings().stream().anyMatch(w -> w.startsWith("force level not reached at 2")
