@@ -233,18 +233,29 @@ final class BenchCommand implements Runnable {
         public Integer call() throws Exception {
             SweepBenchmark.Figures f = SweepBenchmark.run();
             if (json) {
-                spec.commandLine().getOut().println(ResultJson.MAPPER.writeValueAsString(f));
+                ObjectNode node = ResultJson.MAPPER.valueToTree(f);
+                java.util.List<String> keys = new java.util.ArrayList<>();
+                node.fieldNames().forEachRemaining(keys::add);
+                for (String key : keys) {
+                    if (node.get(key).isDouble()) {
+                        ResultJson.putFinite(node, key, node.get(key).asDouble());
+                    }
+                }
+                spec.commandLine().getOut().println(ResultJson.MAPPER.writeValueAsString(node));
             } else {
                 spec.commandLine().getOut().printf(Locale.ROOT,
                         "sweep: adaptive %.1f rig s (%d steps; max error f %.2g, zeta %.2g)%n"
-                                + "       uniform %.1f rig s (%d steps, settle %.3f s; max error f %.2g, zeta %.2g;"
-                                + " %d sweeps searched, longest that missed the goal %.1f rig s)%n"
-                                + "       lower bound %.1f rig s; uniform/adaptive %.1fx, adaptive/lower bound %.2fx;"
-                                + " goal f %.2g, zeta %.2g; %.0f s wall%n",
+                                + "       uniform %s%.1f rig s (%s; %d sweeps searched)%n"
+                                + "       lower bound %.1f rig s; uniform/adaptive %s%.1fx, adaptive/lower bound %.2fx;"
+                                + " %.0f s wall%n",
                         f.adaptiveRigTimeS(), f.adaptiveSteps(), f.adaptiveFrequencyError(), f.adaptiveDampingError(),
-                        f.uniformRigTimeS(), f.uniformSteps(), f.uniformSettleS(), f.uniformFrequencyError(),
-                        f.uniformDampingError(), f.uniformTrials(), f.uniformLongestFailedRigTimeS(), f.lowerBoundRigTimeS(), f.uniformToAdaptive(),
-                        f.adaptiveToLowerBound(), f.frequencyGoal(), f.dampingGoal(), f.wallTimeS());
+                        f.uniformReachedGoal() ? "" : "> ", f.uniformRigTimeS(), f.uniformReachedGoal()
+                                ? String.format(Locale.ROOT, "%d steps, settle %.3f s; max error f %.2g, zeta %.2g",
+                                        f.uniformSteps(), f.uniformSettleS(), f.uniformFrequencyError(),
+                                        f.uniformDampingError())
+                                : "no uniform sweep within the search reached the adaptive sweep's accuracy",
+                        f.uniformTrials(), f.lowerBoundRigTimeS(), f.uniformReachedGoal() ? "" : ">= ",
+                        f.uniformToAdaptive(), f.adaptiveToLowerBound(), f.wallTimeS());
             }
             spec.commandLine().getOut().flush();
             return 0;
