@@ -50,7 +50,7 @@ public final class SweepBenchmark {
     private static final int[] STEP_LADDER = {300, 600, 1200, 2400, 4800, 9600};
     private static final double[] SETTLE_TAUS = {0.5, 1.5, 4.6};
     /** The search tries no uniform sweep planned to take more than this multiple of the adaptive rig time. */
-    private static final double SEARCH_CAP = 20.0;
+    private static final double SEARCH_CAP = 40.0;
 
     private SweepBenchmark() {
     }
