@@ -87,6 +87,22 @@ class AdaptiveSweepSafetyTest {
     }
 
     @Test
+    void aLinkFaultMidStepRampsDownSwitchesOffAndIsJournaled() {
+        RecordingRig rig = new RecordingRig(new SimulatedRig(SweepFixtures.singlePolarisationWire()));
+        rig.readsBeforeLinkFault = 25;
+        RecordingJournal journal = new RecordingJournal();
+        AdaptiveSweepResult result = new AdaptiveSweepRunner(rig).run(plan(SweepFixtures.wideLimits()),
+                SweepEventListener.NONE, () -> false, journal);
+
+        assertEquals(SweepStatus.FAULT, result.status());
+        assertEquals("fault: link lost: the rig stopped answering", result.reason());
+        assertFalse(rig.exciter().isOutputEnabled(), "output off after a fault");
+        assertRampedDownThenOff(rig);
+        assertEquals(List.of(SweepStatus.FAULT), journal.endings);
+        assertEquals(result.passes().get(0).points().size(), journal.steps.size());
+    }
+
+    @Test
     void aDriveLevelAboveTheDriveLimitIsRefusedBeforeAnyExcitation() {
         RigException e = assertThrows(RigException.class, () -> new AdaptiveSweepPlan(200, 260, LevelMode.DRIVE,
                 List.of(3.0), 2e-5, 0.02, new SafetyLimits(2.0, 4, 9e-4, 9e-4), SweepDirection.UP, 600, 9, 0.002, 0.01,

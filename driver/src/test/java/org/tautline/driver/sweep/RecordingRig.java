@@ -21,6 +21,7 @@ final class RecordingRig implements Rig {
     private final Rig inner;
     private double frequencyHz;
     int readsBeforeCancel = Integer.MAX_VALUE;
+    int readsBeforeLinkFault = Integer.MAX_VALUE;
 
     RecordingRig(Rig inner) {
         this.inner = inner;
@@ -86,6 +87,9 @@ final class RecordingRig implements Rig {
 
             @Override
             public SampleBlock read(int n) {
+                if (blockPeaks.size() >= readsBeforeLinkFault) {
+                    throw new org.tautline.driver.RigException("link lost: the rig stopped answering");
+                }
                 SampleBlock b = a.read(n);
                 blockPeaks.add(new double[] {peak(b.samples()[0]), peak(b.samples()[1]), frequencyHz});
                 return b;
