@@ -11,6 +11,7 @@ import org.tautline.app.bench.FrfBenchmark;
 import org.tautline.app.bench.ModalBenchmark;
 import org.tautline.driver.serial.SerialBenchmark;
 import org.tautline.driver.sim.SimulatorBenchmark;
+import org.tautline.driver.sim.SweepBenchmark;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
@@ -20,7 +21,7 @@ import picocli.CommandLine.Model.CommandSpec;
 @Command(name = "bench", mixinStandardHelpOptions = true,
         description = "Run a benchmark and print its figures.",
         subcommands = {BenchCommand.Simulator.class, BenchCommand.FrfFromWav.class, BenchCommand.Modal.class,
-                BenchCommand.Serial.class})
+                BenchCommand.Serial.class, BenchCommand.Sweep.class})
 final class BenchCommand implements Runnable {
     @Spec
     private CommandSpec spec;
@@ -209,6 +210,52 @@ final class BenchCommand implements Runnable {
                         "serial: decode %.0f MB/s; %.0f s over a pty at %d baud: %d blocks, %d lost, longest stall %.0f ms%n",
                         f.decodeMegabytesPerS(), f.linkSeconds(), f.baud(), f.blocksReceived(), f.lostBlocks(),
                         f.longestStallMs());
+            }
+            spec.commandLine().getOut().flush();
+            return 0;
+        }
+    }
+
+    /** {@code tautline bench sweep}: rig time of the adaptive sweep against a tuned uniform sweep and a lower bound. */
+    @Command(name = "sweep", mixinStandardHelpOptions = true,
+            description = "Rig time of the adaptive sweep on the simulated wire (three modes, zeta about 0.1 %%) against a"
+                    + " uniform log-spaced stepped sine whose step count and settle time are searched until it reaches the"
+                    + " same f and zeta accuracy (checked against the simulator's truth), and against a lower bound of"
+                    + " 4.6 tau per step. Targets: uniform / adaptive >= 10, adaptive / lower bound <= 2.")
+    static final class Sweep implements Callable<Integer> {
+        @Spec
+        private CommandSpec spec;
+
+        @Option(names = "--json", description = "Print the figures as JSON.")
+        private boolean json;
+
+        @Override
+        public Integer call() throws Exception {
+            SweepBenchmark.Figures f = SweepBenchmark.run();
+            if (json) {
+                ObjectNode node = ResultJson.MAPPER.valueToTree(f);
+                java.util.List<String> keys = new java.util.ArrayList<>();
+                node.fieldNames().forEachRemaining(keys::add);
+                for (String key : keys) {
+                    if (node.get(key).isDouble()) {
+                        ResultJson.putFinite(node, key, node.get(key).asDouble());
+                    }
+                }
+                spec.commandLine().getOut().println(ResultJson.MAPPER.writeValueAsString(node));
+            } else {
+                spec.commandLine().getOut().printf(Locale.ROOT,
+                        "sweep: adaptive %.1f rig s (%d steps; max error f %.2g, zeta %.2g)%n"
+                                + "       uniform %s%.1f rig s (%s; %d sweeps searched)%n"
+                                + "       lower bound %.1f rig s; uniform/adaptive %s%.1fx, adaptive/lower bound %.2fx;"
+                                + " %.0f s wall%n",
+                        f.adaptiveRigTimeS(), f.adaptiveSteps(), f.adaptiveFrequencyError(), f.adaptiveDampingError(),
+                        f.uniformReachedGoal() ? "" : "> ", f.uniformRigTimeS(), f.uniformReachedGoal()
+                                ? String.format(Locale.ROOT, "%d steps, settle %.3f s; max error f %.2g, zeta %.2g",
+                                        f.uniformSteps(), f.uniformSettleS(), f.uniformFrequencyError(),
+                                        f.uniformDampingError())
+                                : "no uniform sweep within the search reached the adaptive sweep's accuracy",
+                        f.uniformTrials(), f.lowerBoundRigTimeS(), f.uniformReachedGoal() ? "" : ">= ",
+                        f.uniformToAdaptive(), f.adaptiveToLowerBound(), f.wallTimeS());
             }
             spec.commandLine().getOut().flush();
             return 0;

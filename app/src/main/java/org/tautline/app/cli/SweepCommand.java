@@ -54,14 +54,19 @@ final class SweepCommand implements Callable<Integer> {
     @Option(names = "--option", paramLabel = "KEY=VALUE", description = "A rig driver option (repeatable), for example seed=7.")
     private List<String> options = new ArrayList<>();
 
-    @Option(names = "--from", required = true, paramLabel = "HZ", description = "First step, Hz.")
+    @Option(names = "--from", paramLabel = "HZ", description = "First step, Hz.")
     private double fromHz;
 
-    @Option(names = "--to", required = true, paramLabel = "HZ", description = "Last step, Hz.")
+    @Option(names = "--to", paramLabel = "HZ", description = "Last step, Hz.")
     private double toHz;
 
-    @Option(names = "--steps", required = true, paramLabel = "N", description = "Number of log-spaced steps, 2 or more.")
+    @Option(names = "--steps", paramLabel = "N", description = "Number of log-spaced steps, 2 or more.")
     private int steps;
+
+    @Option(names = "--plan", paramLabel = "PLAN.json",
+            description = "Run the adaptive engine with this sweep plan (driver/SWEEP_PLAN.md) instead of a uniform"
+                    + " sweep; --from, --to, --steps, --settle-cycles, --cycles and --drive are then not used.")
+    private Path planFile;
 
     @Option(names = "--settle-cycles", paramLabel = "C", defaultValue = "250",
             description = "Drive cycles to wait after each step before fitting (default ${DEFAULT-VALUE}).")
@@ -102,8 +107,15 @@ final class SweepCommand implements Callable<Integer> {
         if (rig.startsWith("serial:")) {
             given.put("port", rig.substring("serial:".length()));
         }
-        SteppedSinePlan plan = new SteppedSinePlan(fromHz, toHz, steps, settleCycles, 0.02, cycles, driveV, rampS, 3);
         RigDrivers drivers = plugins.drivers(err);
+        if (planFile != null) {
+            return AdaptiveSweepCommand.run(drivers, driver, given, SweepPlanFile.read(planFile), runDir, json,
+                    noProgress, spec.commandLine().getOut(), err);
+        }
+        if (steps == 0) {
+            throw new IllegalArgumentException("--from, --to and --steps are required unless --plan is given");
+        }
+        SteppedSinePlan plan = new SteppedSinePlan(fromHz, toHz, steps, settleCycles, 0.02, cycles, driveV, rampS, 3);
         drivers.find(driver);
         Path journal = runDir.resolve(JOURNAL);
         if (Files.exists(journal)) {
@@ -138,7 +150,7 @@ final class SweepCommand implements Callable<Integer> {
      * Runs a sweep so that an interrupt (Ctrl-C) cancels it: the drive ramps down, the output goes off
      * and the journal records the cancel before the process ends. A fault is reported with the way on.
      */
-    static SweepRecord runInterruptibly(Function<BooleanSupplier, SweepRecord> sweep, Path runDir, PrintWriter err) {
+    static <T> T runInterruptibly(Function<BooleanSupplier, T> sweep, Path runDir, PrintWriter err) {
         AtomicBoolean cancel = new AtomicBoolean();
         CountDownLatch done = new CountDownLatch(1);
         Thread hook = new Thread(() -> {

@@ -116,4 +116,57 @@ public final class JsonFields {
         }
         return out;
     }
+
+    /**
+     * A field holding one JSON object, named for messages as this file's field.
+     *
+     * @param field the field
+     * @return its fields
+     */
+    public JsonFields object(String field) {
+        JsonNode value = node.get(field);
+        if (value == null || !value.isObject()) {
+            throw new AnalysisException(where + ": field \"" + field + "\" must be an object");
+        }
+        return new JsonFields(where + ", " + field, value);
+    }
+
+    /**
+     * A field holding a non-empty array of numbers.
+     *
+     * @param field the field
+     * @return the numbers, in order
+     */
+    public java.util.List<Double> numbers(String field) {
+        JsonNode value = node.get(field);
+        if (value == null || !value.isArray() || value.isEmpty()) {
+            throw new AnalysisException(where + ": field \"" + field + "\" must be a non-empty array of numbers");
+        }
+        java.util.List<Double> out = new java.util.ArrayList<>();
+        for (int i = 0; i < value.size(); i++) {
+            if (!value.get(i).isNumber()) {
+                throw new AnalysisException(where + ", " + field + "[" + i + "] holds " + value.get(i) + "; expected a number");
+            }
+            out.add(value.get(i).asDouble());
+        }
+        return out;
+    }
+
+    /**
+     * An optional whole-number field.
+     *
+     * @param field the field
+     * @param fallback the value when the field is absent
+     * @return the number
+     */
+    public int wholeNumber(String field, int fallback) {
+        if (!has(field)) {
+            return fallback;
+        }
+        JsonNode value = node.get(field);
+        if (!value.canConvertToInt() || !value.isIntegralNumber()) {
+            throw new AnalysisException(where + ": field \"" + field + "\" holds " + value + "; expected a whole number");
+        }
+        return value.asInt();
+    }
 }

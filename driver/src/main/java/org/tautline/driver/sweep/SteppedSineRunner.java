@@ -220,7 +220,7 @@ public final class SteppedSineRunner {
         return remaining;
     }
 
-    private static String checkChannels(List<ChannelInfo> channels) {
+    static String checkChannels(List<ChannelInfo> channels) {
         if (channels.size() < 2) {
             throw new RigException("the rig offers " + channels.size()
                     + " channel(s); a sweep needs channel 0 = force and channel 1 = response");
@@ -252,7 +252,7 @@ public final class SteppedSineRunner {
     }
 
     /** Ramps the drive down and switches the output off; a failed ramp still ends with the output off. */
-    private static void switchOff(Exciter exciter, double rampS) {
+    static void switchOff(Exciter exciter, double rampS) {
         try {
             if (exciter.isOutputEnabled()) {
                 exciter.rampTo(0.0, rampS);

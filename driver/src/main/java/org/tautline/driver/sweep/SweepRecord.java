@@ -33,14 +33,27 @@ public record SweepRecord(SteppedSinePlan plan, String responseQuantity, List<Sw
      * @return the FRF in the quantity of the response channel (receptance for displacement)
      */
     public Frf toFrf() {
-        int n = points.size();
+        return frfOf(points, responseQuantity);
+    }
+
+    /**
+     * The FRF of any list of sweep points, in increasing frequency, as {@link #toFrf()} describes.
+     *
+     * @param points the points, in any order, no two at the same frequency
+     * @param responseQuantity displacement, velocity or acceleration
+     * @return the FRF
+     */
+    public static Frf frfOf(List<SweepPoint> points, String responseQuantity) {
+        List<SweepPoint> sorted = new java.util.ArrayList<>(points);
+        sorted.sort(java.util.Comparator.comparingDouble(SweepPoint::frequencyHz));
+        int n = sorted.size();
         double[] f = new double[n];
         double[] re = new double[n];
         double[] im = new double[n];
         double[] quality = new double[n];
         double[] variance = new double[n];
         for (int i = 0; i < n; i++) {
-            SweepPoint p = points.get(i);
+            SweepPoint p = sorted.get(i);
             f[i] = p.frequencyHz();
             re[i] = p.response().getReal();
             im[i] = p.response().getImaginary();

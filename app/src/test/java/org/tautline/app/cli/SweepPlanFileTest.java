@@ -1,0 +1,70 @@
+package org.tautline.app.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.tautline.analysis.AnalysisException;
+import org.tautline.driver.sweep.AdaptiveSweepPlan;
+import org.tautline.driver.sweep.LevelMode;
+import org.tautline.driver.sweep.SweepDirection;
+
+/** The adaptive sweep plan file: the documented example reads back, and errors name file, field and expectation. */
+class SweepPlanFileTest {
+    private static final String EXAMPLE = """
+            {
+              "startHz": 150, "stopHz": 800,
+              "levelMode": "force", "levels": [0.005, 0.01],
+              "frequencyRelStd": 2e-5, "dampingRelStd": 0.02,
+              "limits": {"driveV": 5, "forceN": 2, "responseAmplitude": 9e-4, "displacementM": 9e-4},
+              "direction": "both",
+              "timeBudgetS": 1800
+            }
+            """;
+
+    @TempDir
+    Path dir;
+
+    private Path write(String json) throws IOException {
+        Path file = dir.resolve("plan.json");
+        Files.writeString(file, json);
+        return file;
+    }
+
+    @Test
+    void readsTheDocumentedExample() throws IOException {
+        AdaptiveSweepPlan plan = SweepPlanFile.read(write(EXAMPLE));
+        assertEquals(LevelMode.FORCE, plan.levelMode());
+        assertEquals(List.of(0.005, 0.01), plan.levels());
+        assertEquals(List.of(SweepDirection.UP, SweepDirection.DOWN), plan.passes());
+        assertEquals(5.0, plan.limits().driveV());
+        assertEquals(35, plan.coarseStepCount());
+        assertEquals(0.0, plan.fixedDwellS(), "detection unless a dwell is asked for");
+    }
+
+    @Test
+    void namesTheFileTheFieldAndWhatWasExpected() throws IOException {
+        Path file = write(EXAMPLE.replace("\"direction\": \"both\"", "\"direction\": \"sideways\""));
+        AnalysisException e = assertThrows(AnalysisException.class, () -> SweepPlanFile.read(file));
+        assertEquals(file + ": field \"direction\" holds \"sideways\"; expected one of \"up\", \"down\", \"both\"",
+                e.getMessage());
+
+        Path missing = write(EXAMPLE.replace("\"forceN\": 2, ", ""));
+        e = assertThrows(AnalysisException.class, () -> SweepPlanFile.read(missing));
+        assertEquals(missing + ", limits: field \"forceN\" is missing; expected a number", e.getMessage());
+
+        Path tooHigh = write(EXAMPLE.replace("[0.005, 0.01]", "[0.005, 3]"));
+        e = assertThrows(AnalysisException.class, () -> SweepPlanFile.read(tooHigh));
+        assertEquals(tooHigh + ": force level 3.0 N must be below limits.forceN 2.0 N", e.getMessage());
+
+        Path steps = write(EXAMPLE.replace("\"timeBudgetS\": 1800", "\"timeBudgetS\": 1800, \"coarseSteps\": 2.5"));
+        e = assertThrows(AnalysisException.class, () -> SweepPlanFile.read(steps));
+        assertEquals(steps + ": field \"coarseSteps\" holds 2.5; expected a whole number", e.getMessage());
+    }
+}

@@ -1,0 +1,130 @@
+package org.tautline.driver.sweep;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+import org.tautline.driver.RigException;
+import org.tautline.driver.sim.SimulatedRig;
+
+/**
+ * Safety limits, cancel and the way the drive is brought down, on the simulated wire around its first mode (228 Hz).
+ *
+ * <p>What is checked is the engine's own contract, against the rig's recorded commands and blocks: a
+ * limit trips on the first block that reaches it (no block is read after it), the drive then ramps to
+ * zero over the plan's ramp time before the output is switched off (never a step to zero, which would
+ * ring the specimen: common practice), and the journal holds exactly the steps the result holds.
+ */
+class AdaptiveSweepSafetyTest {
+    private static final double RAMP_S = 0.1;
+
+    private static AdaptiveSweepPlan plan(SafetyLimits limits) {
+        return new AdaptiveSweepPlan(200, 260, LevelMode.DRIVE, List.of(1.0), 2e-5, 0.02, limits, SweepDirection.UP,
+                600, 9, 0.002, 0.01, 64, 0.0, 0.01, 1.0, 20.0, RAMP_S, 1);
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @CsvSource({
+            "force, 10, 0.1, 9e-4, 9e-4",
+            "response, 10, 4, 4.5e-5, 9e-4",
+            "specimen displacement, 10, 4, 9e-4, 4.5e-5"})
+    void eachMeasuredLimitTripsWithinOneBlockAndRampsDown(String what, double driveV, double forceN, double response,
+                                                           double displacementM) {
+        RecordingRig rig = new RecordingRig(new SimulatedRig(SweepFixtures.singlePolarisationWire()));
+        RecordingJournal journal = new RecordingJournal();
+        SafetyLimits limits = new SafetyLimits(driveV, forceN, response, displacementM);
+        AdaptiveSweepResult result = new AdaptiveSweepRunner(rig).run(plan(limits), SweepEventListener.NONE,
+                () -> false, journal);
+
+        assertEquals(SweepStatus.LIMIT, result.status(), result.reason());
+        assertTrue(result.reason().startsWith("safety limit reached: " + what), result.reason());
+        int firstOver = -1;
+        for (int i = 0; i < rig.blockPeaks.size(); i++) {
+            double[] p = rig.blockPeaks.get(i);
+            double displacement = p[1]; // the simulated sensor measures displacement
+            boolean over = switch (what) {
+                case "force" -> p[0] >= forceN;
+                case "response" -> p[1] >= response;
+                default -> displacement >= displacementM;
+            };
+            if (over) {
+                firstOver = i;
+                break;
+            }
+        }
+        assertEquals(rig.blockPeaks.size() - 1, firstOver, "the block that reached the limit is the last one read");
+        assertRampedDownThenOff(rig);
+        assertEquals(List.of(SweepStatus.LIMIT), journal.endings);
+        assertEquals(result.reason(), journal.reasons.get(0), "the journal records why");
+        assertEquals(result.passes().get(0).points().size(), journal.steps.size());
+    }
+
+    @Test
+    void aCancelMidStepLeavesTheOutputOffAndTheJournalConsistent() {
+        RecordingRig rig = new RecordingRig(new SimulatedRig(SweepFixtures.singlePolarisationWire()));
+        rig.readsBeforeCancel = 30;
+        RecordingJournal journal = new RecordingJournal();
+        AdaptiveSweepResult result = new AdaptiveSweepRunner(rig).run(plan(SweepFixtures.wideLimits()),
+                SweepEventListener.NONE, rig::cancelRequested, journal);
+
+        assertEquals(SweepStatus.CANCELLED, result.status());
+        assertFalse(rig.exciter().isOutputEnabled(), "output off after a cancel");
+        assertRampedDownThenOff(rig);
+        List<SweepPoint> points = result.passes().get(0).points();
+        assertTrue(points.size() > 0 && points.size() < 30, "stopped part way: " + points.size() + " steps");
+        assertEquals(points.size(), journal.steps.size(), "every completed step is journaled, the step in progress not");
+        for (int i = 0; i < journal.steps.size(); i++) {
+            assertEquals(i, journal.steps.get(i).index());
+            assertEquals(points.get(i), journal.steps.get(i).point());
+        }
+        assertEquals(List.of(SweepStatus.CANCELLED), journal.endings, "one ending, recorded once");
+    }
+
+    @Test
+    void aLinkFaultMidStepRampsDownSwitchesOffAndIsJournaled() {
+        RecordingRig rig = new RecordingRig(new SimulatedRig(SweepFixtures.singlePolarisationWire()));
+        rig.readsBeforeLinkFault = 25;
+        RecordingJournal journal = new RecordingJournal();
+        AdaptiveSweepResult result = new AdaptiveSweepRunner(rig).run(plan(SweepFixtures.wideLimits()),
+                SweepEventListener.NONE, () -> false, journal);
+
+        assertEquals(SweepStatus.FAULT, result.status());
+        assertEquals("fault: link lost: the rig stopped answering", result.reason());
+        assertFalse(rig.exciter().isOutputEnabled(), "output off after a fault");
+        assertRampedDownThenOff(rig);
+        assertEquals(List.of(SweepStatus.FAULT), journal.endings);
+        assertEquals(result.passes().get(0).points().size(), journal.steps.size());
+    }
+
+    @Test
+    void aDriveLevelAboveTheDriveLimitIsRefusedBeforeAnyExcitation() {
+        RigException e = assertThrows(RigException.class, () -> new AdaptiveSweepPlan(200, 260, LevelMode.DRIVE,
+                List.of(3.0), 2e-5, 0.02, new SafetyLimits(2.0, 4, 9e-4, 9e-4), SweepDirection.UP, 600, 9, 0.002, 0.01,
+                64, 0.0, 0.01, 1.0, 20.0, RAMP_S, 1));
+        assertEquals("sweep plan: drive level 3.0 V is above limits.driveV 2.0 V", e.getMessage());
+    }
+
+    /** After the stop: a ramp to 0 V over the ramp time, then output off, and no zero-amplitude step while on. */
+    private static void assertRampedDownThenOff(RecordingRig rig) {
+        List<RecordingRig.Command> c = rig.commands;
+        RecordingRig.Command last = c.get(c.size() - 1);
+        RecordingRig.Command beforeLast = c.get(c.size() - 2);
+        assertEquals("off", last.kind());
+        assertEquals("ramp", beforeLast.kind());
+        assertEquals(0.0, beforeLast.amplitudeV());
+        assertEquals(RAMP_S, beforeLast.durationS(), 1e-12);
+        boolean on = false;
+        for (RecordingRig.Command cmd : c) {
+            on = cmd.kind().equals("on") || (on && !cmd.kind().equals("off"));
+            if (on && cmd.kind().equals("sine")) {
+                assertTrue(cmd.amplitudeV() > 0, "no step of the drive to zero while the output is on");
+            }
+        }
+    }
+}

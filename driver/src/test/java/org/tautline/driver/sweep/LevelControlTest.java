@@ -1,0 +1,58 @@
+package org.tautline.driver.sweep;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+
+import org.junit.jupiter.api.Test;
+import org.tautline.driver.sim.SimulatedRig;
+
+/**
+ * Force-level control across the first resonance of the simulated wire, where the heavy shaker armature nearly
+ * pins the wire and the force per volt drops about fifteenfold.
+ *
+ * <p>The reference is the target itself: ISO 7626-2 asks for the excitation level to be controlled and
+ * stated (from memory); the issue's criterion is every step within 2 % of the target force.
+ */
+class LevelControlTest {
+    private static AdaptiveSweepPlan plan(double targetN, double driveLimitV) {
+        return new AdaptiveSweepPlan(215, 245, LevelMode.FORCE, List.of(targetN), 2e-5, 0.02,
+                new SafetyLimits(driveLimitV, 4, 9e-4, 9e-4), SweepDirection.UP, 600, 9, 0.002, 0.01, 64, 0.0, 0.01,
+                0.2, 20.0, 0.1, 1);
+    }
+
+    @Test
+    void holdsTheTargetForceWithinTwoPercentAcrossTheResonance() {
+        double targetN = 0.005;
+        AdaptiveSweepResult result = new AdaptiveSweepRunner(new SimulatedRig(SweepFixtures.singlePolarisationWire())).run(
+                plan(targetN, 5.0), SweepEventListener.NONE, () -> false, SweepJournal.NONE);
+        assertEquals(SweepStatus.COMPLETED, result.status(), result.reason());
+        AdaptivePass pass = result.passes().get(0);
+        double minForcePerVolt = Double.POSITIVE_INFINITY;
+        double maxForcePerVolt = 0;
+        for (SweepPoint p : pass.points()) {
+            assertEquals(targetN, p.forceAmplitudeN(), 0.02 * targetN, "force at " + p.frequencyHz() + " Hz");
+            assertTrue(p.driveAmplitudeV() <= 5.0, "drive within the limit");
+            minForcePerVolt = Math.min(minForcePerVolt, p.forceAmplitudeN() / p.driveAmplitudeV());
+            maxForcePerVolt = Math.max(maxForcePerVolt, p.forceAmplitudeN() / p.driveAmplitudeV());
+        }
+        assertTrue(minForcePerVolt < 0.2 * maxForcePerVolt, "the sweep crossed a force drop: force per volt "
+                + minForcePerVolt + " .. " + maxForcePerVolt + " N/V");
+        assertTrue(pass.points().size() > 20, "refined around the resonance: " + pass.points().size() + " steps");
+        assertTrue(pass.warnings().isEmpty(), pass.warnings().toString());
+    }
+
+    @Test
+    void warnsWhereTheDriveLimitCannotReachTheLevel() {
+        double targetN = 0.005;
+        AdaptiveSweepResult result = new AdaptiveSweepRunner(new SimulatedRig(SweepFixtures.singlePolarisationWire())).run(
+                plan(targetN, 2.0), SweepEventListener.NONE, () -> false, SweepJournal.NONE);
+        AdaptivePass pass = result.passes().get(0);
+        assertTrue(pass.warnings().stream().anyMatch(w -> w.startsWith("force level not reached at 2")
+                && w.endsWith("with the drive at its limit 2.0 V")), pass.warnings().toString());
+        for (SweepPoint p : pass.points()) {
+            assertTrue(p.driveAmplitudeV() <= 2.0, "the drive limit is never exceeded: " + p.driveAmplitudeV() + " V");
+        }
+    }
+}

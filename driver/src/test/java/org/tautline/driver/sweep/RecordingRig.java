@@ -1,0 +1,117 @@
+package org.tautline.driver.sweep;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.tautline.driver.spi.Acquisition;
+import org.tautline.driver.spi.ChannelInfo;
+import org.tautline.driver.spi.Exciter;
+import org.tautline.driver.spi.Rig;
+import org.tautline.driver.spi.SampleBlock;
+
+/** Wraps a rig and records every exciter command and the peaks of every block read. */
+final class RecordingRig implements Rig {
+    /** One exciter command: kind "sine", "ramp", "on" or "off", amplitude V, duration s. */
+    record Command(String kind, double amplitudeV, double durationS, long atSample) {
+    }
+
+    final List<Command> commands = new ArrayList<>();
+    /** Per block: {force peak, response peak, drive frequency}. */
+    final List<double[]> blockPeaks = new ArrayList<>();
+    private final Rig inner;
+    private double frequencyHz;
+    int readsBeforeCancel = Integer.MAX_VALUE;
+    int readsBeforeLinkFault = Integer.MAX_VALUE;
+
+    RecordingRig(Rig inner) {
+        this.inner = inner;
+    }
+
+    boolean cancelRequested() {
+        return blockPeaks.size() >= readsBeforeCancel;
+    }
+
+    @Override
+    public String identity() {
+        return "recording " + inner.identity();
+    }
+
+    @Override
+    public Exciter exciter() {
+        Exciter e = inner.exciter();
+        return new Exciter() {
+            @Override
+            public void setSine(double f, double a) {
+                frequencyHz = f;
+                commands.add(new Command("sine", a, 0, inner.acquisition().nextSampleIndex()));
+                e.setSine(f, a);
+            }
+
+            @Override
+            public void rampTo(double a, double d) {
+                commands.add(new Command("ramp", a, d, inner.acquisition().nextSampleIndex()));
+                e.rampTo(a, d);
+            }
+
+            @Override
+            public void setOutputEnabled(boolean on) {
+                commands.add(new Command(on ? "on" : "off", 0, 0, inner.acquisition().nextSampleIndex()));
+                e.setOutputEnabled(on);
+            }
+
+            @Override
+            public boolean isOutputEnabled() {
+                return e.isOutputEnabled();
+            }
+
+            @Override
+            public double maxAmplitudeV() {
+                return e.maxAmplitudeV();
+            }
+        };
+    }
+
+    @Override
+    public Acquisition acquisition() {
+        Acquisition a = inner.acquisition();
+        return new Acquisition() {
+            @Override
+            public double sampleRateHz() {
+                return a.sampleRateHz();
+            }
+
+            @Override
+            public List<ChannelInfo> channels() {
+                return a.channels();
+            }
+
+            @Override
+            public SampleBlock read(int n) {
+                if (blockPeaks.size() >= readsBeforeLinkFault) {
+                    throw new org.tautline.driver.RigException("link lost: the rig stopped answering");
+                }
+                SampleBlock b = a.read(n);
+                blockPeaks.add(new double[] {peak(b.samples()[0]), peak(b.samples()[1]), frequencyHz});
+                return b;
+            }
+
+            @Override
+            public long nextSampleIndex() {
+                return a.nextSampleIndex();
+            }
+        };
+    }
+
+    private static double peak(double[] x) {
+        double m = 0;
+        for (double v : x) {
+            m = Math.max(m, Math.abs(v));
+        }
+        return m;
+    }
+
+    @Override
+    public void close() {
+        inner.close();
+    }
+}
