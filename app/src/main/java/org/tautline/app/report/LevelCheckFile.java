@@ -44,6 +44,21 @@ final class LevelCheckFile {
                 + resultJson.getFileName() + "): " + (linear ? "linear" : "not linear"))));
     }
 
+    /** @return the recorded sweep in words: steps, rig time, wall time, whether it completed; empty when not recorded */
+    static Optional<String> sweepLine(Path resultJson) throws IOException {
+        if (!Files.isRegularFile(resultJson)) {
+            return Optional.empty();
+        }
+        JsonNode root = new ObjectMapper().readTree(resultJson.toFile());
+        if (root == null || !root.has("steps") || !root.has("rigTimeS")) {
+            return Optional.empty();
+        }
+        return Optional.of(String.format(java.util.Locale.ROOT, "Sweep as recorded in %s: %d steps, rig time %s s,"
+                        + " wall time %s s, %s.", resultJson.getFileName(), root.path("steps").asInt(),
+                Figures.format(root.path("rigTimeS").asDouble()), Figures.format(root.path("wallTimeS").asDouble(Double.NaN)),
+                root.path("sweepCompleted").asBoolean() ? "completed" : "stopped before the end"));
+    }
+
     private static double number(Path file, JsonNode node, String field, int index) {
         JsonNode value = node.get(field);
         if (value == null || !value.isNumber()) {

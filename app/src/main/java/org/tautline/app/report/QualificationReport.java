@@ -63,6 +63,7 @@ public final class QualificationReport {
                 verdictLine(w, r);
                 specimen(w, r.specimen());
                 rig(w, run.metadata());
+                run.recordedSweep().ifPresent(line -> w.line(line, 9));
                 w.keep(260);
                 w.heading("Measured FRF and the fitted modal model");
                 ReportCharts.frf(r).draw(w, 230);
@@ -143,6 +144,14 @@ public final class QualificationReport {
             w.line(String.format(Locale.ROOT, "Harmonic %d (about %s Hz) absent: %s", a.harmonic(),
                     Figures.format(a.expectedFrequencyHz()), a.explanation()), 8);
         }
+        r.modal().quality().ifPresent(q -> w.line(String.format(Locale.ROOT,
+                "Fit over %s .. %s Hz: normalised residual %s, correlation %s.", Figures.format(r.modal().bandLowHz()),
+                Figures.format(r.modal().bandHighHz()), Figures.format(q.normalisedResidual()),
+                Figures.format(q.correlation())), 8));
+        var res = r.modal().residualTerms();
+        w.line(String.format(Locale.ROOT, "Residual terms: upper %s %+.6g j m/N, lower %s %+.6g j N/m per (rad/s)^2 term.",
+                Figures.format(res.upper().getReal()), res.upper().getImaginary(), Figures.format(res.lower().getReal()),
+                res.lower().getImaginary()), 8);
         r.modal().warnings().forEach(note -> w.line("Note: " + note, 8));
     }
 
@@ -163,7 +172,17 @@ public final class QualificationReport {
             w.line(String.format(Locale.ROOT, "From the modal constants: stinger at %s +/- %s m, sensor at %s +/- %s m.",
                     Figures.format(p.forcingPositionM()), Figures.format(p.forcingPositionStdM()),
                     Figures.format(p.sensorPositionM()), Figures.format(p.sensorPositionStdM())), 9);
+            w.line("Linear density implied by the modal constants (if the calibration is right): "
+                    + Figures.format(p.effectiveLinearDensityKgPerM()) + " kg/m.", 9);
             p.findings().forEach(f -> w.line(f, 8));
+        });
+        r.linearity().ifPresent(l -> {
+            l.shifts().forEach(h -> w.line(String.format(Locale.ROOT, "Level check, harmonic %d: %s Hz at the first level,"
+                            + " %s Hz at the second; relative shift %s +/- %s (Kirchhoff-Carrier predicts %s).", h.harmonic(),
+                    Figures.format(h.firstFrequencyHz()), Figures.format(h.secondFrequencyHz()),
+                    Figures.format(h.relativeShift()), Figures.format(h.relativeShiftStd()),
+                    Figures.format(h.predictedRelativeShift())), 9));
+            l.findings().forEach(f -> w.line(f, 8));
         });
     }
 

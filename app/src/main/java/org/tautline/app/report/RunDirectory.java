@@ -23,8 +23,10 @@ import org.tautline.app.qualify.SpecimenFile;
  * @param directory the directory
  * @param result the qualification re-derived from its files
  * @param metadata the FRF file's metadata (rig, sensors, calibration, plan), in file order
+ * @param recordedSweep the sweep as {@code result.json} recorded it (steps, rig and wall time), in words
  */
-public record RunDirectory(Path directory, QualificationResult result, java.util.Map<String, String> metadata) {
+public record RunDirectory(Path directory, QualificationResult result, java.util.Map<String, String> metadata,
+                           Optional<String> recordedSweep) {
 
     /** Copies the metadata. */
     public RunDirectory {
@@ -68,6 +70,6 @@ public record RunDirectory(Path directory, QualificationResult result, java.util
         if (levels.isPresent()) {
             result = Qualification.withLinearity(result, levels.get(), specification);
         }
-        return new RunDirectory(directory, result, frf.metadata());
+        return new RunDirectory(directory, result, frf.metadata(), LevelCheckFile.sweepLine(directory.resolve(RESULT)));
     }
 }
