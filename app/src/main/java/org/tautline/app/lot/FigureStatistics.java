@@ -40,20 +40,24 @@ public record FigureStatistics(String key, String unit, int n, double mean, doub
             throw new IllegalArgumentException("figure " + key + ": statistics need at least one value, got none");
         }
         int n = values.size();
+        // Sums of differences from the first value: identical values give exactly their value and a zero spread.
+        double origin = values.get(0);
         double sum = 0;
         double min = Double.POSITIVE_INFINITY;
         double max = Double.NEGATIVE_INFINITY;
         for (double v : values) {
-            sum += v;
+            sum += v - origin;
             min = Math.min(min, v);
             max = Math.max(max, v);
         }
-        double mean = sum / n;
+        double meanOffset = sum / n;
+        double mean = origin + meanOffset;
         double std = Double.NaN;
         if (n > 1) {
             double squares = 0;
             for (double v : values) {
-                squares += (v - mean) * (v - mean);
+                double d = (v - origin) - meanOffset;
+                squares += d * d;
             }
             std = Math.sqrt(squares / (n - 1));
         }

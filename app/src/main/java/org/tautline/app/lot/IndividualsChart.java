@@ -32,11 +32,12 @@ public record IndividualsChart(List<Double> values, double centre, double averag
      * @return the chart
      */
     public static IndividualsChart of(List<Double> values) {
+        double origin = values.get(0);
         double sum = 0;
         for (double v : values) {
-            sum += v;
+            sum += v - origin;
         }
-        double centre = sum / values.size();
+        double centre = origin + sum / values.size();
         double mr = Double.NaN;
         if (values.size() > 1) {
             double ranges = 0;

@@ -150,6 +150,9 @@ final class PdfChart {
         if (!xAxis && logY) {
             return new double[] {Math.pow(10, Math.floor(Math.log10(lo))), Math.pow(10, Math.ceil(Math.log10(hi)))};
         }
+        if (hi - lo <= 1e-9 * Math.max(Math.abs(hi), Math.abs(lo))) {
+            hi = lo;
+        }
         double pad = hi > lo ? (xAxis ? 0 : 0.08 * (hi - lo)) : Math.max(Math.abs(lo) * 0.05, 1e-12);
         return new double[] {lo - pad, hi + pad};
     }

@@ -44,6 +44,16 @@ class FigureStatisticsTest {
     }
 
     @Test
+    void identicalValuesHaveNoSpreadAndNoFalseAlarm() {
+        List<Double> same = List.of(225.56288538358473, 225.56288538358473, 225.56288538358473);
+        FigureStatistics s = FigureStatistics.of("f1Hz", "Hz", same, 215, 245);
+        assertEquals(225.56288538358473, s.mean());
+        assertEquals(0.0, s.std());
+        assertTrue(Double.isNaN(s.cpk()), "no spread, no capability index");
+        assertEquals(List.of(), s.chart().outOfControl());
+    }
+
+    @Test
     void cpkIsUndefinedWithoutSpreadOrLimits() {
         assertTrue(Double.isNaN(FigureStatistics.of("x", "", List.of(1.0), 0, 2).cpk()), "one value has no spread");
         assertTrue(Double.isNaN(FigureStatistics.cpk(1, 0.1, Double.NaN, Double.NaN)), "no limit");
