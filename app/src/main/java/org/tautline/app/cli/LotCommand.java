@@ -53,6 +53,10 @@ final class LotCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         String location = register != null ? register : add != null ? besideRuns(add) : LotRegister.DEFAULT_FILE_NAME;
+        if (add == null && !location.startsWith("jdbc:") && !java.nio.file.Files.exists(Path.of(location))) {
+            throw new org.tautline.analysis.AnalysisException("register file " + Path.of(location).toAbsolutePath()
+                    + " does not exist; expected --register FILE|URL naming a lot register, or --add RUNDIR to start one");
+        }
         List<LotEntry> entries;
         try (LotRegister r = LotRegister.open(location)) {
             if (add != null) {

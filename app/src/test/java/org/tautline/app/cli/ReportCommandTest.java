@@ -142,6 +142,16 @@ class ReportCommandTest {
     }
 
     @Test
+    void lotRefusesAMissingRegisterFileWithoutCreatingIt(@TempDir Path out) {
+        Path missing = out.resolve("none.sqlite");
+        CliRun run = CliRun.of("lot", "LOT-7", "--register", missing.toString());
+        assertEquals(1, run.exitCode());
+        assertEquals("tautline: register file " + missing.toAbsolutePath() + " does not exist; expected --register FILE|URL"
+                + " naming a lot register, or --add RUNDIR to start one\n", run.err().replace("\r", ""));
+        assertTrue(!Files.exists(missing));
+    }
+
+    @Test
     void exportWritesUnitsInTheHeaders(@TempDir Path out) throws Exception {
         CliRun run = CliRun.of("export", runDir.toString(), "--out", out.toString());
         assertEquals(0, run.exitCode(), run.err());
