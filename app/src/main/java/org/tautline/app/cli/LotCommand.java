@@ -71,7 +71,7 @@ final class LotCommand implements Callable<Integer> {
         } else if (entries.isEmpty()) {
             out.println("Lot " + lot + " has no qualification in " + location);
         } else {
-            out.printf(Locale.ROOT, "Lot %s: %d qualifications%n", lot, entries.size());
+            out.printf(Locale.ROOT, "Lot %s: %d qualification%s%n", lot, entries.size(), entries.size() == 1 ? "" : "s");
             out.printf(Locale.ROOT, "%-30s %4s %13s %13s %13s %13s %8s %13s %13s%n", "figure", "n", "mean", "std", "min", "max",
                     "Cpk", "LCL", "UCL");
             for (FigureStatistics s : statistics) {

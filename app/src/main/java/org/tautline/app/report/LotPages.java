@@ -17,7 +17,8 @@ final class LotPages {
 
     static void write(PageWriter w, String lotName, List<FigureStatistics> lot) {
         w.keep(60 + 11 * lot.size());
-        w.heading("Lot " + lotName + ": " + lot.stream().mapToInt(FigureStatistics::n).max().orElse(0) + " qualifications");
+        int count = lot.stream().mapToInt(FigureStatistics::n).max().orElse(0);
+        w.heading("Lot " + lotName + ": " + count + (count == 1 ? " qualification" : " qualifications"));
         w.line("Std is the sample standard deviation; Cpk = min(USL - mean, mean - LSL) / (3 std) against the"
                 + " specification's limits (Montgomery, Introduction to Statistical Quality Control).", 8);
         w.row(new String[] {"figure", "n", "mean", "std", "min", "max", "Cpk", "unit"}, COLUMNS, true);
