@@ -32,8 +32,18 @@ final class DemoCommand implements Callable<Integer> {
     private boolean json;
 
     @Option(names = "--out", paramLabel = "DIR",
-            description = "Write frf.csv, truth.json, result.json, specimen.json and spec.json into DIR.")
+            description = "Write frf.csv, truth.json, result.json, specimen.json, spec.json and report.pdf into DIR.")
     private Path outDir;
+
+    @Option(names = "--lot", paramLabel = "LOT", description = "Append the qualification to this lot in the register (needs --out).")
+    private String lot;
+
+    @Option(names = "--register", paramLabel = "FILE|URL", description = "The lot register: an SQLite file or a"
+            + " jdbc:postgresql URL (default: " + org.tautline.app.lot.LotRegister.DEFAULT_FILE_NAME + " beside DIR).")
+    private String register;
+
+    @Option(names = "--operator", paramLabel = "NAME", defaultValue = "", description = "The operator's name for the report.")
+    private String operator;
 
     @Option(names = "--no-progress", description = "Do not draw the progress bar.")
     private boolean noProgress;
@@ -55,6 +65,9 @@ final class DemoCommand implements Callable<Integer> {
         if (outDir != null) {
             write(outcome, outDir);
             System.err.println("tautline: wrote frf.csv, truth.json, result.json, specimen.json and spec.json to " + outDir);
+            DemoRecords.write(outDir, lot, register, operator);
+        } else if (lot != null) {
+            throw new org.tautline.analysis.AnalysisException("--lot needs --out DIR: the register keeps where the run's files are");
         }
         return 0;
     }
@@ -64,6 +77,7 @@ final class DemoCommand implements Callable<Integer> {
         Map<String, String> metadata = new LinkedHashMap<>();
         metadata.put("specimen", outcome.result().specimen().id());
         metadata.put("source", "Tautline demo on the simulated rig (invented specimen)");
+        metadata.putAll(DemoRecords.rigMetadata());
         FrfCsvWriter.write(outcome.result().receptance(), metadata, dir.resolve("frf.csv"));
         ResultJson.MAPPER.writeValue(dir.resolve("truth.json").toFile(), ResultJson.truth(outcome.truth()));
         ResultJson.MAPPER.writeValue(dir.resolve("result.json").toFile(), ResultJson.outcome(outcome));

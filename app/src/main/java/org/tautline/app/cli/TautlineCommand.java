@@ -7,7 +7,7 @@ import picocli.CommandLine.Command;
         description = "Vibration qualification of tensioned strings, wires and belts."
                 + " With no command, opens the workbench window.",
         subcommands = {DemoCommand.class, FrfCommand.class, FitCommand.class, BenchCommand.class, RigsCommand.class, VirtualRigCommand.class,
-                SweepCommand.class, ResumeCommand.class})
+                SweepCommand.class, ResumeCommand.class, ReportCommand.class, ExportCommand.class, LotCommand.class})
 final class TautlineCommand implements Runnable {
     @picocli.CommandLine.Spec
     private picocli.CommandLine.Model.CommandSpec spec;

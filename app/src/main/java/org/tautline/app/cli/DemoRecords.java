@@ -1,0 +1,73 @@
+package org.tautline.app.cli;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+import org.tautline.app.lot.FigureStatistics;
+import org.tautline.app.lot.LotEntries;
+import org.tautline.app.lot.LotRegister;
+import org.tautline.app.lot.LotStatistics;
+import org.tautline.app.qualify.DemoScenario;
+import org.tautline.app.report.QualificationReport;
+import org.tautline.app.report.ReportInfo;
+import org.tautline.app.report.RunDirectory;
+import org.tautline.driver.sim.SensorSetup;
+import org.tautline.driver.sim.ShakerModel;
+import org.tautline.driver.sim.SimulationConfig;
+import org.tautline.driver.sweep.SteppedSinePlan;
+
+/** The demo's records: the rig lines of its FRF file, its report, and its entry in the lot register. */
+final class DemoRecords {
+    private DemoRecords() {
+    }
+
+    /** @return rig, sensors, calibration and plan of the demo as FRF file metadata */
+    static Map<String, String> rigMetadata() {
+        SimulationConfig sim = DemoScenario.simulation();
+        ShakerModel shaker = sim.shaker();
+        SensorSetup sensors = sim.sensors();
+        SteppedSinePlan plan = DemoScenario.plan();
+        Map<String, String> m = new LinkedHashMap<>();
+        m.put("rig", "simulated rig (invented), sample rate " + fmt(sim.sampleRateHz()) + " Hz");
+        m.put("exciter", String.format(Locale.ROOT, "electrodynamic model: moving mass %s kg, force constant %s N/A, coil %s ohm",
+                fmt(shaker.movingMassKg()), fmt(shaker.forceConstantNPerA()), fmt(shaker.coilResistanceOhm())));
+        m.put("force sensor", String.format(Locale.ROOT, "full scale %s N, noise %s N/sqrt(Hz), %d-bit ADC",
+                fmt(sensors.forceFullScale()), fmt(sensors.forceNoiseDensity()), sensors.adcBits()));
+        m.put("response sensor", String.format(Locale.ROOT, "%s, full scale %s, noise %s per sqrt(Hz)",
+                sensors.responseSensor().name().toLowerCase(Locale.ROOT), fmt(sensors.responseFullScale()),
+                fmt(sensors.responseNoiseDensity())));
+        m.put("calibration", "simulated transducers read in SI units directly: sensitivity 1, no calibration certificate applies");
+        m.put("sweep plan", String.format(Locale.ROOT, "stepped sine %s to %s Hz in %d log-spaced steps, settle %s cycles"
+                        + " (at least %s s), integrate %d cycles, drive %s V peak, ramp %s s, harmonics to order %d",
+                fmt(plan.startHz()), fmt(plan.stopHz()), plan.stepCount(), fmt(plan.settleCycles()), fmt(plan.minSettleS()),
+                plan.integrationCycles(), fmt(plan.driveAmplitudeV()), fmt(plan.rampS()), plan.harmonicOrder()));
+        return m;
+    }
+
+    private static String fmt(double v) {
+        return String.format(Locale.ROOT, "%.4g", v);
+    }
+
+    /** Appends the run to the lot when asked, then writes DIR/report.pdf (with the lot's charts when a lot is given). */
+    static void write(Path dir, String lot, String register, String operator) throws IOException {
+        RunDirectory run = RunDirectory.read(dir);
+        List<FigureStatistics> statistics = List.of();
+        if (lot != null) {
+            String location = register != null ? register : LotCommand.besideRuns(dir);
+            try (LotRegister r = LotRegister.open(location)) {
+                r.append(LotEntries.of(lot, run.result(), dir.toAbsolutePath().toString(), Instant.now()));
+                statistics = LotStatistics.of(r.entries(lot));
+                System.err.println("tautline: appended " + run.result().specimen().id() + " to lot " + lot + " in " + r.name());
+            }
+        }
+        Path pdf = dir.resolve("report.pdf");
+        QualificationReport.write(run, new ReportInfo(operator, ReportInfo.SOFTWARE, Instant.now()), lot == null ? "" : lot,
+                statistics, pdf);
+        System.err.println("tautline: wrote " + pdf);
+    }
+}

@@ -1,0 +1,111 @@
+package org.tautline.app.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import org.tautline.app.lot.FigureStatistics;
+import org.tautline.app.lot.LotEntries;
+import org.tautline.app.lot.LotEntry;
+import org.tautline.app.lot.LotRegister;
+import org.tautline.app.lot.LotStatistics;
+import org.tautline.app.report.RunDirectory;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code tautline lot}: per-figure statistics of a lot from the register; {@code --add} appends a run first. */
+@Command(name = "lot", mixinStandardHelpOptions = true,
+        description = "Print per-figure statistics of a lot from the lot register (n, mean, std, min, max, Cpk against"
+                + " the specification) with its individuals-chart limits. --add RUNDIR appends a run first.")
+final class LotCommand implements Callable<Integer> {
+    @Spec
+    private CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "LOT", description = "The lot name.")
+    private String lot;
+
+    @Option(names = "--register", paramLabel = "FILE|URL",
+            description = "An SQLite file or a jdbc:postgresql URL (default: " + LotRegister.DEFAULT_FILE_NAME
+                    + " in the current folder, or beside RUNDIR with --add).")
+    private String register;
+
+    @Option(names = "--add", paramLabel = "RUNDIR", description = "Qualify this run directory again and append it to the lot.")
+    private Path add;
+
+    @Option(names = "--json", description = "Print the statistics as JSON.")
+    private boolean json;
+
+    /** @return the default register beside a run directory: in its parent folder */
+    static String besideRuns(Path runDir) {
+        Path parent = runDir.toAbsolutePath().getParent();
+        return (parent == null ? Path.of(LotRegister.DEFAULT_FILE_NAME) : parent.resolve(LotRegister.DEFAULT_FILE_NAME)).toString();
+    }
+
+    @Override
+    public Integer call() throws IOException {
+        String location = register != null ? register : add != null ? besideRuns(add) : LotRegister.DEFAULT_FILE_NAME;
+        if (add == null && !location.startsWith("jdbc:") && !java.nio.file.Files.exists(Path.of(location))) {
+            throw new org.tautline.analysis.AnalysisException("register file " + Path.of(location).toAbsolutePath()
+                    + " does not exist; expected --register FILE|URL naming a lot register, or --add RUNDIR to start one");
+        }
+        List<LotEntry> entries;
+        try (LotRegister r = LotRegister.open(location)) {
+            if (add != null) {
+                r.append(LotEntries.of(lot, RunDirectory.read(add).result(), add.toAbsolutePath().toString(), Instant.now()));
+            }
+            entries = r.entries(lot);
+        }
+        List<FigureStatistics> statistics = LotStatistics.of(entries);
+        PrintWriter out = spec.commandLine().getOut();
+        if (json) {
+            out.println(ResultJson.MAPPER.writeValueAsString(json(statistics)));
+        } else if (entries.isEmpty()) {
+            out.println("Lot " + lot + " has no qualification in " + location);
+        } else {
+            out.printf(Locale.ROOT, "Lot %s: %d qualification%s%n", lot, entries.size(), entries.size() == 1 ? "" : "s");
+            out.printf(Locale.ROOT, "%-30s %4s %13s %13s %13s %13s %8s %13s %13s%n", "figure", "n", "mean", "std", "min", "max",
+                    "Cpk", "LCL", "UCL");
+            for (FigureStatistics s : statistics) {
+                out.printf(Locale.ROOT, "%-30s %4d %13.6g %13.6g %13.6g %13.6g %8.3f %13.6g %13.6g%n",
+                        s.key() + (s.unit().isEmpty() ? "" : " (" + s.unit() + ")"), s.n(), s.mean(), s.std(), s.min(), s.max(),
+                        s.cpk(), s.chart().lowerControlLimit(), s.chart().upperControlLimit());
+            }
+        }
+        out.flush();
+        return 0;
+    }
+
+    private static ObjectNode json(List<FigureStatistics> statistics) {
+        ObjectNode root = ResultJson.MAPPER.createObjectNode();
+        ArrayNode figures = root.putArray("figures");
+        for (FigureStatistics s : statistics) {
+            ObjectNode f = figures.addObject();
+            f.put("figure", s.key());
+            f.put("unit", s.unit());
+            f.put("n", s.n());
+            f.put("mean", s.mean());
+            f.put("std", s.std());
+            f.put("min", s.min());
+            f.put("max", s.max());
+            f.put("lowerLimit", s.lowerLimit());
+            f.put("upperLimit", s.upperLimit());
+            f.put("cpk", s.cpk());
+            f.put("chartCentre", s.chart().centre());
+            f.put("chartAverageMovingRange", s.chart().averageMovingRange());
+            f.put("chartLowerControlLimit", s.chart().lowerControlLimit());
+            f.put("chartUpperControlLimit", s.chart().upperControlLimit());
+            ArrayNode values = f.putArray("values");
+            s.chart().values().forEach(values::add);
+        }
+        return root;
+    }
+}
