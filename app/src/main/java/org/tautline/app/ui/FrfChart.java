@@ -1,7 +1,6 @@
 package org.tautline.app.ui;
 
 import java.awt.BasicStroke;
-import java.awt.Color;
 import java.awt.geom.Ellipse2D;
 
 import org.jfree.chart.ChartPanel;
@@ -37,13 +36,8 @@ final class FrfChart {
         renderer.setSeriesShapesVisible(1, false);
         renderer.setSeriesStroke(1, new BasicStroke(1.6f));
         XYPlot plot = new XYPlot(data, frequencyAxis, magnitudeAxis, renderer);
-        plot.setBackgroundPaint(Color.WHITE);
-        plot.setDomainGridlinePaint(Color.LIGHT_GRAY);
-        plot.setRangeGridlinePaint(Color.LIGHT_GRAY);
         JFreeChart chart = new JFreeChart("FRF magnitude", JFreeChart.DEFAULT_TITLE_FONT, plot, true);
-        chart.setBackgroundPaint(Color.WHITE);
-        panel = new ChartPanel(chart);
-        panel.setMouseWheelEnabled(true);
+        panel = ChartStyle.panel(chart);
     }
 
     ChartPanel panel() {
