@@ -25,7 +25,7 @@ import org.tautline.driver.spi.RigOption;
  * <p>The serial port list is read on a background thread; connecting is done by the workbench, off the event thread.
  */
 final class RigScreen {
-    private final JPanel panel = new JPanel(new MigLayout("insets 10, wrap 1, fillx", "[grow,fill]"));
+    private final JPanel panel = new JPanel(new MigLayout("insets 10, wrap 1", "[left]"));
     private final JPanel optionPanel = new JPanel(new MigLayout("insets 0, wrap 3", "[right][260:260:][grow]"));
     private final JComboBox<String> driverBox = new JComboBox<>();
     private final Map<String, JComboBox<String>> optionEditors = new LinkedHashMap<>();
@@ -72,7 +72,7 @@ final class RigScreen {
         JLabel healthTitle = new JLabel("Identity and health");
         healthTitle.putClientProperty("FlatLaf.styleClass", "h4");
         panel.add(healthTitle, "gaptop 12");
-        panel.add(identity);
+        panel.add(identity, "w 900!");
         for (String w : drivers.warnings()) {
             panel.add(new JLabel("Plugin warning: " + w));
         }

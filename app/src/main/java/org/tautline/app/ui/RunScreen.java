@@ -14,7 +14,7 @@ import net.miginfocom.swing.MigLayout;
  * signals beside the FRF as it grows point by point.
  */
 final class RunScreen {
-    private final JPanel panel = new JPanel(new MigLayout("insets 10, fill, wrap 1", "[grow,fill]", "[][][][grow,fill]"));
+    private final JPanel panel = new JPanel(new MigLayout("insets 10, fill, wrap 1", "[grow,fill]", "[][][][][grow,fill]"));
     final JButton start = new JButton("Start sweep");
     final JButton pause = new JButton("Pause");
     final JButton resume = new JButton("Resume");
@@ -40,12 +40,12 @@ final class RunScreen {
         JLabel title = new JLabel("Run");
         title.putClientProperty("FlatLaf.styleClass", "h3");
         panel.add(title);
-        panel.add(start, "split 4, sg b");
-        panel.add(pause, "sg b");
-        panel.add(resume, "sg b");
-        panel.add(cancel, "sg b");
-        panel.add(progress, "split 2, growx");
-        panel.add(settle, "w 55%!");
+        panel.add(start, "split 4, sg b, growx 0, w 140!");
+        panel.add(pause, "sg b, growx 0");
+        panel.add(resume, "sg b, growx 0");
+        panel.add(cancel, "sg b, growx 0");
+        panel.add(progress, "h 22!");
+        panel.add(settle);
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, traces.panel(), frf.panel());
         split.setResizeWeight(0.45);
         panel.add(split, "grow");

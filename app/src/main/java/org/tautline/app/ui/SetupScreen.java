@@ -26,7 +26,7 @@ import org.tautline.app.ui.setup.SetupForm;
  * any field that is wrong (what was typed, what was expected).
  */
 final class SetupScreen {
-    private final JPanel panel = new JPanel(new MigLayout("insets 10, gapx 24, hidemode 3", "[grow,fill][grow,fill][grow,fill]", "[top]"));
+    private final JPanel panel = new JPanel(new MigLayout("insets 10, gapx 32, hidemode 3", "[][]push", "[top][top]"));
     private final Map<String, JComponent> editors = new LinkedHashMap<>();
     private final Map<String, JLabel> messages = new LinkedHashMap<>();
     private final Runnable onEdit;
@@ -37,9 +37,9 @@ final class SetupScreen {
     SetupScreen(SetupForm form, Runnable onEdit) {
         this.form = form;
         this.onEdit = onEdit;
-        for (SetupField.Section s : SetupField.Section.values()) {
-            panel.add(section(s));
-        }
+        panel.add(section(SetupField.Section.SPECIMEN), "spany 2");
+        panel.add(section(SetupField.Section.PLAN), "wrap");
+        panel.add(limitsSection(), "skip 1");
         validate();
     }
 
@@ -91,14 +91,46 @@ final class SetupScreen {
             p.add(label);
             p.add(editor);
             p.add(new JLabel(f.unit()));
-            JLabel message = new JLabel();
-            message.setName("problem." + f.key());
-            message.setForeground(errorColour());
-            message.setVisible(false);
-            p.add(message, "skip 1, span 2, wmax 340, gapbottom 4");
-            messages.put(f.key(), message);
+            p.add(problemLabel(f), "skip 1, span 2, wmax 340, gapbottom 4");
         }
         return p;
+    }
+
+    /** The limits as one row each: lower bound, upper bound, unit; an empty bound means none. */
+    private JPanel limitsSection() {
+        JPanel p = new JPanel(new MigLayout("insets 0, wrap 5, gapy 2", "[right][90:110:][center][90:110:][]"));
+        JLabel title = new JLabel(SetupField.Section.LIMITS.title());
+        title.putClientProperty("FlatLaf.styleClass", "h3");
+        p.add(title, "span 5, left, gapbottom 6");
+        p.add(new JLabel("<html><small>an empty bound means none</small></html>"), "skip 1, span 4, left");
+        java.util.List<SetupField> limits = form.fields().stream()
+                .filter(f -> f.section() == SetupField.Section.LIMITS).toList();
+        for (int i = 0; i + 1 < limits.size(); i += 2) {
+            SetupField lower = limits.get(i);
+            SetupField upper = limits.get(i + 1);
+            JLabel label = new JLabel(lower.label().replaceFirst(": at least$", ""));
+            JComponent lowerEditor = editor(lower);
+            label.setLabelFor(lowerEditor);
+            p.add(label);
+            p.add(lowerEditor, "growx");
+            p.add(new JLabel("to"));
+            p.add(editor(upper), "growx");
+            p.add(new JLabel(upper.unit()));
+            for (SetupField f : java.util.List.of(lower, upper)) {
+                JLabel message = problemLabel(f);
+                p.add(message, "skip 1, span 4, wmax 380, gapbottom 4");
+            }
+        }
+        return p;
+    }
+
+    private JLabel problemLabel(SetupField f) {
+        JLabel message = new JLabel();
+        message.setName("problem." + f.key());
+        message.setForeground(errorColour());
+        message.setVisible(false);
+        messages.put(f.key(), message);
+        return message;
     }
 
     private void addMaterialPreset(JPanel p) {
@@ -126,7 +158,7 @@ final class SetupScreen {
         materialLabel.setLabelFor(material);
         materialLabel.setDisplayedMnemonic('M');
         p.add(materialLabel);
-        p.add(material, "span 2, wmax 360");
+        p.add(material, "span 2, wmax 300");
         p.add(new JLabel("Wire diameter"));
         p.add(diameter);
         p.add(new JLabel("m"));

@@ -1,0 +1,36 @@
+package org.tautline.app.ui;
+
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.awt.EventQueue;
+
+import org.junit.jupiter.api.Test;
+
+/** The event queue runs without a display, so the watchdog can be checked headless. */
+class EdtWatchdogTest {
+    @Test
+    void recordsAStallOfTheEventThreadAndWhereItWas() throws Exception {
+        try (EdtWatchdog watchdog = new EdtWatchdog(20).start()) {
+            Thread.sleep(200);
+            assertTrue(watchdog.longestDelayMs() < 150, "idle event thread: " + watchdog.longestDelayMs() + " ms");
+            EventQueue.invokeAndWait(EdtWatchdogTest::blockFor300Ms);
+            Thread.sleep(100);
+            assertTrue(watchdog.longestDelayMs() >= 200, "after a 300 ms block: " + watchdog.longestDelayMs() + " ms");
+            assertTrue(watchdog.stackAtLongestDelay().contains("blockFor300Ms"), watchdog.stackAtLongestDelay());
+            assertTrue(watchdog.probeCount() > 3);
+        }
+    }
+
+    private static void blockFor300Ms() {
+        long end = System.nanoTime() + 300_000_000L;
+        while (System.nanoTime() < end) {
+            Thread.onSpinWait();
+        }
+    }
+
+    @Test
+    void takesADarkDesktopThemeForADarkLook() {
+        assertTrue(Themes.isDarkThemeName("Adwaita-dark"));
+        assertTrue(!Themes.isDarkThemeName("Adwaita") && !Themes.isDarkThemeName(null));
+    }
+}
