@@ -84,7 +84,7 @@ public final class EdtWatchdog implements AutoCloseable {
     private static String stackOf(Thread thread) {
         StringBuilder out = new StringBuilder();
         StackTraceElement[] stack = thread.getStackTrace();
-        for (int i = 0; i < Math.min(25, stack.length); i++) {
+        for (int i = 0; i < Math.min(60, stack.length); i++) {
             out.append("\n  at ").append(stack[i]);
         }
         return out.toString();

