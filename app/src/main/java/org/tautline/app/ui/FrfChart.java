@@ -45,6 +45,16 @@ final class FrfChart {
         panel.getChart().setAntiAlias(!live);
     }
 
+    /**
+     * Fixes the frequency axis to a sweep's band so that the chart grows into a steady frame.
+     *
+     * @param startHz first step, Hz
+     * @param stopHz last step, Hz
+     */
+    void band(double startHz, double stopHz) {
+        ((org.jfree.chart.plot.XYPlot) panel.getChart().getPlot()).getDomainAxis().setRange(startHz * 0.95, stopHz * 1.05);
+    }
+
     ChartPanel panel() {
         return panel;
     }

@@ -143,6 +143,9 @@ final class RunController {
         }
         session = new SweepSession(rig, form.plan());
         parts.run().frf().clear();
+        parts.run().frf().band(form.plan().startHz(), form.plan().stopHz());
+        org.tautline.driver.spi.ChannelInfo response = rig.acquisition().channels().get(1);
+        parts.run().traces().responseLabel("Response, " + response.quantity() + " (" + response.unit() + ")");
         parts.run().traces().clear();
         traceBuffer.clear();
         pendingHz.clear();

@@ -40,10 +40,12 @@ final class RunScreen {
         JLabel title = new JLabel("Run");
         title.putClientProperty("FlatLaf.styleClass", "h3");
         panel.add(title);
-        panel.add(start, "split 4, sg b, growx 0, w 140!");
-        panel.add(pause, "sg b, growx 0");
-        panel.add(resume, "sg b, growx 0");
-        panel.add(cancel, "sg b, growx 0");
+        JPanel controls = new JPanel(new MigLayout("insets 0", "[sg b][sg b][sg b][sg b]"));
+        controls.add(start);
+        controls.add(pause);
+        controls.add(resume);
+        controls.add(cancel);
+        panel.add(controls, "growx 0");
         panel.add(progress, "h 22!");
         panel.add(settle);
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, traces.panel(), frf.panel());

@@ -74,7 +74,7 @@ final class SetupScreen {
     }
 
     private JPanel section(SetupField.Section section) {
-        JPanel p = new JPanel(new MigLayout("insets 0, wrap 3, gapy 2", "[right][grow,fill,100:140:][]"));
+        JPanel p = new JPanel(new MigLayout("insets 0, wrap 3, gapy 2, hidemode 3", "[right][grow,fill,100:140:][]"));
         JLabel title = new JLabel(section.title());
         title.putClientProperty("FlatLaf.styleClass", "h3");
         p.add(title, "span 3, left, gapbottom 6");
@@ -98,7 +98,7 @@ final class SetupScreen {
 
     /** The limits as one row each: lower bound, upper bound, unit; an empty bound means none. */
     private JPanel limitsSection() {
-        JPanel p = new JPanel(new MigLayout("insets 0, wrap 5, gapy 2", "[right][90:110:][center][90:110:][]"));
+        JPanel p = new JPanel(new MigLayout("insets 0, wrap 5, gapy 2, hidemode 3", "[right][90:110:][center][90:110:][]"));
         JLabel title = new JLabel(SetupField.Section.LIMITS.title());
         title.putClientProperty("FlatLaf.styleClass", "h3");
         p.add(title, "span 5, left, gapbottom 6");

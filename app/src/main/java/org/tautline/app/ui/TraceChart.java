@@ -39,6 +39,12 @@ final class TraceChart {
         return new XYPlot(series, null, axis, r);
     }
 
+    /** @param label the response axis label, with its unit */
+    void responseLabel(String label) {
+        CombinedDomainXYPlot plot = (CombinedDomainXYPlot) panel.getChart().getPlot();
+        plot.getSubplots().get(1).getRangeAxis().setLabel(label);
+    }
+
     ChartPanel panel() {
         return panel;
     }

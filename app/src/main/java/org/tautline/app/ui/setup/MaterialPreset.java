@@ -31,8 +31,8 @@ public record MaterialPreset(Material material) {
     @Override
     public String toString() {
         String modulus = material.hasYoungsModulus()
-                ? String.format(java.util.Locale.ROOT, "E %.1f GPa", material.youngsModulusPa() / 1e9) : "no modulus in the table";
-        return String.format(java.util.Locale.ROOT, "%s (rho %.0f kg/m³, %s)", material.label(), material.densityKgPerM3(),
+                ? String.format(java.util.Locale.ROOT, "%.0f GPa", material.youngsModulusPa() / 1e9) : "no modulus";
+        return String.format(java.util.Locale.ROOT, "%s (%.0f kg/m³, %s)", material.label(), material.densityKgPerM3(),
                 modulus);
     }
 
