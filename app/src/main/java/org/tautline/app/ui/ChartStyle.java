@@ -45,7 +45,7 @@ final class ChartStyle {
         Color background = colour("Panel.background", Color.WHITE);
         Color text = colour("Label.foreground", Color.BLACK);
         Color plotBackground = colour("TextField.background", Color.WHITE);
-        Color grid = mix(plotBackground, text, 0.25);
+        Color grid = mix(plotBackground, text, 0.15);
         chart.setBackgroundPaint(background);
         if (chart.getTitle() != null) {
             chart.getTitle().setPaint(text);

@@ -40,7 +40,7 @@ final class RunScreen {
         JLabel title = new JLabel("Run");
         title.putClientProperty("FlatLaf.styleClass", "h3");
         panel.add(title);
-        JPanel controls = new JPanel(new MigLayout("insets 0", "[sg b][sg b][sg b][sg b]"));
+        JPanel controls = new JPanel(new MigLayout("insets 0", "[sg b,fill][sg b,fill][sg b,fill][sg b,fill]"));
         controls.add(start);
         controls.add(pause);
         controls.add(resume);
