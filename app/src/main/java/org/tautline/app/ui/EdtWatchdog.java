@@ -1,20 +1,25 @@
 package org.tautline.app.ui;
 
 import java.awt.EventQueue;
-import java.util.concurrent.atomic.AtomicLong;
 
 /**
  * Measures how responsive the Swing event thread is: a daemon thread posts a probe every
  * {@code periodMs} milliseconds and records the longest wait between posting and running.
+ *
+ * <p>Two figures are kept. {@link #longestDelayMs()} is every delay as measured. {@link #longestStallMs()}
+ * counts a delay only when the event thread itself was found busy: three periods after posting, the
+ * watchdog (woken on time) sees the probe still waiting and records what the event thread is doing. A
+ * delay during which the watchdog itself could not run (a pause of the whole JVM, or a machine too busy
+ * to schedule it) is not the event thread's doing and counts only in the first figure.
  */
 public final class EdtWatchdog implements AutoCloseable {
     private final long periodMs;
-    private final AtomicLong longestDelayNs = new AtomicLong();
-    private final AtomicLong probes = new AtomicLong();
     private final Thread thread;
     private volatile boolean running = true;
     private volatile Thread eventThread;
-    private volatile String pendingStack = "";
+    private volatile long longestDelayNs;
+    private volatile long longestStallNs;
+    private volatile long probes;
     private volatile String stackAtLongest = "";
 
     /** @param periodMs time between probes, milliseconds, 1 or more */
@@ -35,34 +40,8 @@ public final class EdtWatchdog implements AutoCloseable {
 
     private void probeLoop() {
         while (running) {
-            long posted = System.nanoTime();
-            Object ran = new Object();
-            boolean[] done = {false};
-            EventQueue.invokeLater(() -> {
-                eventThread = Thread.currentThread();
-                long delay = System.nanoTime() - posted;
-                if (delay > longestDelayNs.get()) {
-                    stackAtLongest = pendingStack;
-                }
-                longestDelayNs.accumulateAndGet(System.nanoTime() - posted, Math::max);
-                probes.incrementAndGet();
-                synchronized (ran) {
-                    done[0] = true;
-                    ran.notifyAll();
-                }
-            });
             try {
-                synchronized (ran) {
-                    // Wait for the probe before posting the next, so that a stall counts once, in full.
-                    pendingStack = "";
-                    ran.wait(periodMs * 3);
-                    if (!done[0] && eventThread != null) {
-                        pendingStack = stackOf(eventThread);
-                    }
-                    while (!done[0] && running) {
-                        ran.wait(periodMs);
-                    }
-                }
+                probeOnce();
                 Thread.sleep(periodMs);
             } catch (InterruptedException e) {
                 Thread.currentThread().interrupt();
@@ -71,14 +50,65 @@ public final class EdtWatchdog implements AutoCloseable {
         }
     }
 
-    /** @return the longest delay seen between posting a probe and the event thread running it, milliseconds */
-    public double longestDelayMs() {
-        return longestDelayNs.get() / 1e6;
+    private void probeOnce() throws InterruptedException {
+        Object lock = new Object();
+        long[] ranAt = {0};
+        long posted = System.nanoTime();
+        EventQueue.invokeLater(() -> {
+            eventThread = Thread.currentThread();
+            synchronized (lock) {
+                ranAt[0] = System.nanoTime();
+                lock.notifyAll();
+            }
+        });
+        long checkNs = 3 * periodMs * 1_000_000L;
+        String stack = "";
+        boolean attributable = true;
+        synchronized (lock) {
+            long deadline = posted + checkNs;
+            for (long left = checkNs; ranAt[0] == 0 && left > 0 && running; left = deadline - System.nanoTime()) {
+                lock.wait(Math.max(1, left / 1_000_000L));
+            }
+            if (ranAt[0] == 0) {
+                long lateNs = System.nanoTime() - deadline;
+                attributable = lateNs < periodMs * 1_000_000L;
+                Thread edt = eventThread;
+                stack = edt == null ? "" : stackOf(edt);
+            }
+            while (ranAt[0] == 0 && running) {
+                lock.wait(periodMs);
+            }
+        }
+        if (ranAt[0] == 0) {
+            return;
+        }
+        long delay = ranAt[0] - posted;
+        probes++;
+        longestDelayNs = Math.max(longestDelayNs, delay);
+        if (attributable && delay > longestStallNs) {
+            longestStallNs = delay;
+            stackAtLongest = stack;
+        }
     }
 
-    /** @return what the event thread was doing during the longest delay, when that delay was over three periods */
-    public String stackAtLongestDelay() {
+    /** @return the longest delay seen between posting a probe and the event thread running it, milliseconds */
+    public double longestDelayMs() {
+        return longestDelayNs / 1e6;
+    }
+
+    /** @return the longest delay while the event thread was found busy, milliseconds (see the class comment) */
+    public double longestStallMs() {
+        return longestStallNs / 1e6;
+    }
+
+    /** @return what the event thread was doing during the longest stall, when it was over three periods */
+    public String stackAtLongestStall() {
         return stackAtLongest;
+    }
+
+    /** @return probes that have run */
+    public long probeCount() {
+        return probes;
     }
 
     private static String stackOf(Thread thread) {
@@ -88,11 +118,6 @@ public final class EdtWatchdog implements AutoCloseable {
             out.append("\n  at ").append(stack[i]);
         }
         return out.toString();
-    }
-
-    /** @return probes that have run */
-    public long probeCount() {
-        return probes.get();
     }
 
     /** Stops probing. */
