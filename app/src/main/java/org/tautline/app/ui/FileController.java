@@ -202,7 +202,13 @@ final class FileController {
             return;
         }
         Path file = chooser.getSelectedFile().toPath();
-        readThenAnalyse(file, () -> RecordingImport.frfOf(file));
+        SetupForm form = parts.setup().form();
+        if (!parts.setup().validate()) {
+            parts.showSetup();
+            parts.status().message("Fix the setup first: the import needs the sensor sensitivities.");
+            return;
+        }
+        readThenAnalyse(file, () -> RecordingImport.frfOf(file, form.recordingCalibrations(), form.recordingQuantity()));
     }
 
     private interface FrfSource {

@@ -26,7 +26,7 @@ import org.tautline.app.ui.setup.SetupForm;
  * any field that is wrong (what was typed, what was expected).
  */
 final class SetupScreen {
-    private final JPanel panel = new JPanel(new MigLayout("insets 10, gapx 32, hidemode 3", "[][]push", "[top][top]"));
+    private final JPanel panel = new JPanel(new MigLayout("insets 10, gapx 32, hidemode 3", "[][]push", "[top]"));
     private final Map<String, JComponent> editors = new LinkedHashMap<>();
     private final Map<String, JLabel> messages = new LinkedHashMap<>();
     private final Runnable onEdit;
@@ -37,9 +37,14 @@ final class SetupScreen {
     SetupScreen(SetupForm form, Runnable onEdit) {
         this.form = form;
         this.onEdit = onEdit;
-        panel.add(section(SetupField.Section.SPECIMEN), "spany 2");
-        panel.add(section(SetupField.Section.PLAN), "wrap");
-        panel.add(limitsSection(), "skip 1");
+        JPanel left = new JPanel(new MigLayout("insets 0, wrap 1, gapy 12"));
+        left.add(section(SetupField.Section.SPECIMEN));
+        left.add(section(SetupField.Section.SENSORS));
+        JPanel right = new JPanel(new MigLayout("insets 0, wrap 1, gapy 12"));
+        right.add(section(SetupField.Section.PLAN));
+        right.add(limitsSection());
+        panel.add(left);
+        panel.add(right);
         validate();
     }
 

@@ -23,6 +23,8 @@ public record SetupField(String key, Section section, String label, String unit,
     public enum Section {
         /** What is stated about the specimen. */
         SPECIMEN("Specimen"),
+        /** The sensors' calibration, applied to recordings imported in volts. */
+        SENSORS("Sensors (for imported recordings)"),
         /** The stepped-sine sweep. */
         PLAN("Sweep plan"),
         /** The specification limits the verdict judges. */

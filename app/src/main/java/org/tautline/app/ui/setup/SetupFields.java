@@ -8,6 +8,7 @@ import static org.tautline.app.ui.setup.SetupField.Kind.TEXT;
 import static org.tautline.app.ui.setup.SetupField.Kind.WHOLE;
 import static org.tautline.app.ui.setup.SetupField.Section.LIMITS;
 import static org.tautline.app.ui.setup.SetupField.Section.PLAN;
+import static org.tautline.app.ui.setup.SetupField.Section.SENSORS;
 import static org.tautline.app.ui.setup.SetupField.Section.SPECIMEN;
 
 import java.util.ArrayList;
@@ -40,6 +41,11 @@ final class SetupFields {
         f.add(SetupField.of("forcingPositionM", SPECIMEN, "Forcing point from the left end", "m", POSITIVE));
         f.add(SetupField.of("sensorPositionM", SPECIMEN, "Response sensor from the left end", "m", POSITIVE));
         f.add(SetupField.of("nominalTensionN", SPECIMEN, "Nominal tension", "N", POSITIVE));
+        f.add(SetupField.of("forceSensitivityVPerN", SENSORS, "Force sensor sensitivity", "V/N", POSITIVE));
+        f.add(new SetupField("responseQuantity", SENSORS, "Response sensor measures", "", CHOICE, List.of(
+                "DISPLACEMENT", "VELOCITY", "ACCELERATION")));
+        f.add(SetupField.of("responseSensitivityVPerUnit", SENSORS, "Response sensor sensitivity", "V per SI unit",
+                POSITIVE));
         f.add(SetupField.of("startHz", PLAN, "Band start", "Hz", POSITIVE));
         f.add(SetupField.of("stopHz", PLAN, "Band stop", "Hz", POSITIVE));
         f.add(SetupField.of("stepCount", PLAN, "Steps (log-spaced)", "", WHOLE));
@@ -78,6 +84,10 @@ final class SetupFields {
         v.put("forcingPositionM", SetupForm.format(s.forcingPositionM()));
         v.put("sensorPositionM", SetupForm.format(s.sensorPositionM()));
         v.put("nominalTensionN", SetupForm.format(s.nominalTensionN()));
+        // A recording already in newtons and metres: unit sensitivities.
+        v.put("forceSensitivityVPerN", "1");
+        v.put("responseQuantity", "DISPLACEMENT");
+        v.put("responseSensitivityVPerUnit", "1");
         v.put("startHz", SetupForm.format(p.startHz()));
         v.put("stopHz", SetupForm.format(p.stopHz()));
         v.put("stepCount", Integer.toString(p.stepCount()));

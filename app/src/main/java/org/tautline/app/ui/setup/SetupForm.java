@@ -10,6 +10,8 @@ import java.util.Map;
 import java.util.Optional;
 
 import org.tautline.analysis.AnalysisException;
+import org.tautline.analysis.frf.ChannelCalibration;
+import org.tautline.analysis.frf.FrfQuantity;
 import org.tautline.analysis.specimen.EndCondition;
 import org.tautline.analysis.specimen.Specimen;
 import org.tautline.analysis.verdict.Limit;
@@ -112,6 +114,7 @@ public final class SetupForm {
             specimen();
             plan();
             specification();
+            recordingCalibrations();
         } catch (AnalysisException | RigException e) {
             problems.put(fieldNamedIn(e.getMessage()), e.getMessage());
         }
@@ -167,6 +170,26 @@ public final class SetupForm {
                     bound(SetupFields.upperKey(t))));
         }
         return new Specification("as set in the workbench", limits);
+    }
+
+    /**
+     * The calibrations of an imported recording: channel 0 force, channel 1 the response.
+     *
+     * @return the two calibrations; throws when a field is wrong
+     */
+    public List<ChannelCalibration> recordingCalibrations() {
+        return List.of(ChannelCalibration.of("0", number("forceSensitivityVPerN"), ChannelCalibration.Quantity.FORCE),
+                ChannelCalibration.of("1", number("responseSensitivityVPerUnit"),
+                        ChannelCalibration.Quantity.valueOf(value("responseQuantity"))));
+    }
+
+    /** @return the FRF quantity of an imported recording: receptance, mobility or accelerance, by the response sensor */
+    public FrfQuantity recordingQuantity() {
+        return switch (value("responseQuantity")) {
+            case "VELOCITY" -> FrfQuantity.MOBILITY;
+            case "ACCELERATION" -> FrfQuantity.ACCELERANCE;
+            default -> FrfQuantity.RECEPTANCE;
+        };
     }
 
     private double bound(String key) {
