@@ -91,11 +91,11 @@ class WorkbenchTest {
             try (EdtWatchdog watchdog = new EdtWatchdog(20).start()) {
                 SwingUtilities.invokeAndWait(resume::doClick);
                 waitFor("the sweep to go on", 10, () -> progress.getString().startsWith("step "));
-                JTextArea results = find(frame, JTextArea.class, "results");
-                waitFor("the verdict", 60, () -> results.getText().contains("Verdict"));
+                waitFor("the last step", 60, () -> progress.getValue() == progress.getMaximum());
                 assertNoStall(watchdog);
             }
             JTextArea results = find(frame, JTextArea.class, "results");
+            waitFor("the verdict", 60, () -> results.getText().contains("Verdict"));
             String text = onEdt(results::getText);
             assertTrue(text.contains("Verdict: PASS"), text);
             assertEquals(3, (int) onEdt(() -> w.tabs().getSelectedIndex()));
