@@ -298,11 +298,17 @@ final class RunController {
         parts.run().buttons(rig != null, running, paused);
     }
 
-    /** Closes the rig on the calling thread; for closing the window. */
+    boolean isRunning() {
+        return running;
+    }
+
+    /** Closes the rig on a background thread (a serial link may take a while), for closing the window. */
     void closeRig() {
-        if (rig != null) {
-            rig.close();
-            rig = null;
+        TappedRig closing = rig;
+        rig = null;
+        if (closing != null) {
+            Thread closer = new Thread(closing::close, "rig-close");
+            closer.start();
         }
     }
 }

@@ -219,6 +219,11 @@ public final class Workbench implements WorkbenchParts {
     }
 
     private void close() {
+        if (runs.isRunning()) {
+            runs.stopExcitation();
+            status.message("A sweep was running: the drive is ramping down. Close again once it has stopped.");
+            return;
+        }
         if (files.confirmDiscard()) {
             runs.closeRig();
             frame.dispose();
