@@ -38,7 +38,7 @@ final class RunController {
     private final WorkbenchParts parts;
     private final RigDrivers drivers;
     private final Consumer<QualificationResult> onResult;
-    private final TraceBuffer traceBuffer = new TraceBuffer(1024);
+    private final TraceBuffer traceBuffer = new TraceBuffer(600);
     private final Timer traceTimer;
     private TappedRig rig;
     private SweepSession session;
@@ -51,9 +51,9 @@ final class RunController {
         this.parts = parts;
         this.drivers = drivers;
         this.onResult = onResult;
-        // Redraw the live charts five times a second rather than on every block or step: each redraw paints
+        // Redraw the live charts four times a second rather than on every block or step: each redraw paints
         // the whole chart, and the event thread must stay free for the stop control.
-        this.traceTimer = new Timer(200, e -> redrawLive());
+        this.traceTimer = new Timer(250, e -> redrawLive());
     }
 
     private void redrawLive() {
