@@ -8,9 +8,9 @@ import java.awt.EventQueue;
  *
  * <p>Two figures are kept. {@link #longestDelayMs()} is every delay as measured. {@link #longestStallMs()}
  * counts a delay only when the event thread itself was found busy: three periods after posting, the
- * watchdog (woken on time) sees the probe still waiting and records what the event thread is doing. A
- * delay during which the watchdog itself could not run (a pause of the whole JVM, or a machine too busy
- * to schedule it) is not the event thread's doing and counts only in the first figure.
+ * watchdog sees the probe still waiting and records what the event thread is doing. When the watchdog
+ * itself woke for that look later than half the delay (a pause of the whole JVM, or a machine too busy
+ * to schedule it), the delay is not the event thread's doing and counts only in the first figure.
  */
 public final class EdtWatchdog implements AutoCloseable {
     private final long periodMs;
@@ -63,15 +63,14 @@ public final class EdtWatchdog implements AutoCloseable {
         });
         long checkNs = 3 * periodMs * 1_000_000L;
         String stack = "";
-        boolean attributable = true;
+        long lateNs = -1;
         synchronized (lock) {
             long deadline = posted + checkNs;
             for (long left = checkNs; ranAt[0] == 0 && left > 0 && running; left = deadline - System.nanoTime()) {
                 lock.wait(Math.max(1, left / 1_000_000L));
             }
             if (ranAt[0] == 0) {
-                long lateNs = System.nanoTime() - deadline;
-                attributable = lateNs < periodMs * 1_000_000L;
+                lateNs = System.nanoTime() - deadline;
                 Thread edt = eventThread;
                 stack = edt == null ? "" : stackOf(edt);
             }
@@ -83,6 +82,8 @@ public final class EdtWatchdog implements AutoCloseable {
             return;
         }
         long delay = ranAt[0] - posted;
+        // The watchdog, woken late by less than half the delay, saw the probe waiting: the event thread's doing.
+        boolean attributable = lateNs < Math.max(periodMs * 1_000_000L, delay / 2);
         probes++;
         longestDelayNs = Math.max(longestDelayNs, delay);
         if (attributable && delay > longestStallNs) {

@@ -10,6 +10,7 @@ import org.junit.jupiter.api.Test;
 class EdtWatchdogTest {
     @Test
     void recordsAStallOfTheEventThreadAndWhereItWas() throws Exception {
+        EventQueue.invokeAndWait(() -> { }); // start the event thread before measuring
         try (EdtWatchdog watchdog = new EdtWatchdog(20).start()) {
             Thread.sleep(200);
             assertTrue(watchdog.longestStallMs() < 150, "idle event thread: " + watchdog.longestStallMs() + " ms");
