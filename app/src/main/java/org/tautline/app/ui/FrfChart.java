@@ -1,8 +1,7 @@
 package org.tautline.app.ui;
 
 import java.awt.BasicStroke;
-import java.awt.Color;
-import java.awt.geom.Ellipse2D;
+import java.awt.geom.Rectangle2D;
 
 import org.jfree.chart.ChartPanel;
 import org.jfree.chart.JFreeChart;
@@ -32,18 +31,31 @@ final class FrfChart {
         renderer.setSeriesPaint(0, Palette.MEASURED);
         renderer.setSeriesLinesVisible(0, false);
         renderer.setSeriesShapesVisible(0, true);
-        renderer.setSeriesShape(0, new Ellipse2D.Double(-1.5, -1.5, 3, 3));
+        // Small filled squares without outlines, and the fit as one path: a thousand points redraw quickly.
+        renderer.setSeriesShape(0, new Rectangle2D.Double(-1.5, -1.5, 3, 3));
+        renderer.setDrawOutlines(false);
+        renderer.setDrawSeriesLineAsPath(true);
         renderer.setSeriesPaint(1, Palette.FIT);
         renderer.setSeriesShapesVisible(1, false);
         renderer.setSeriesStroke(1, new BasicStroke(1.6f));
         XYPlot plot = new XYPlot(data, frequencyAxis, magnitudeAxis, renderer);
-        plot.setBackgroundPaint(Color.WHITE);
-        plot.setDomainGridlinePaint(Color.LIGHT_GRAY);
-        plot.setRangeGridlinePaint(Color.LIGHT_GRAY);
         JFreeChart chart = new JFreeChart("FRF magnitude", JFreeChart.DEFAULT_TITLE_FONT, plot, true);
-        chart.setBackgroundPaint(Color.WHITE);
-        panel = new ChartPanel(chart);
-        panel.setMouseWheelEnabled(true);
+        panel = ChartStyle.panel(chart);
+    }
+
+    /** @param live true while points arrive many times a second: draws without anti-aliasing to keep redraws short */
+    void live(boolean live) {
+        panel.getChart().setAntiAlias(!live);
+    }
+
+    /**
+     * Fixes the frequency axis to a sweep's band so that the chart grows into a steady frame.
+     *
+     * @param startHz first step, Hz
+     * @param stopHz last step, Hz
+     */
+    void band(double startHz, double stopHz) {
+        ((org.jfree.chart.plot.XYPlot) panel.getChart().getPlot()).getDomainAxis().setRange(startHz * 0.95, stopHz * 1.05);
     }
 
     ChartPanel panel() {

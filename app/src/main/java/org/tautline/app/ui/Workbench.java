@@ -1,201 +1,271 @@
 package org.tautline.app.ui;
 
 import java.awt.BorderLayout;
-import java.awt.Font;
+import java.awt.Color;
+import java.awt.event.ActionEvent;
+import java.awt.event.InputEvent;
 import java.awt.event.KeyEvent;
-import java.util.List;
-import java.util.Locale;
-import java.util.concurrent.CancellationException;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.atomic.AtomicBoolean;
+import java.awt.event.WindowAdapter;
+import java.awt.event.WindowEvent;
 
 import javax.swing.AbstractAction;
+import javax.swing.ButtonGroup;
 import javax.swing.JButton;
 import javax.swing.JComponent;
 import javax.swing.JFrame;
 import javax.swing.JLabel;
-import javax.swing.JOptionPane;
+import javax.swing.JMenu;
+import javax.swing.JMenuBar;
+import javax.swing.JMenuItem;
 import javax.swing.JPanel;
-import javax.swing.JProgressBar;
-import javax.swing.JScrollPane;
-import javax.swing.JSplitPane;
-import javax.swing.JTextArea;
+import javax.swing.JRadioButtonMenuItem;
+import javax.swing.JTabbedPane;
 import javax.swing.KeyStroke;
 import javax.swing.SwingUtilities;
-import javax.swing.SwingWorker;
 import javax.swing.WindowConstants;
 
-import com.formdev.flatlaf.FlatLightLaf;
 import net.miginfocom.swing.MigLayout;
-import org.tautline.app.SafetyNotice;
-import org.tautline.app.qualify.DemoOutcome;
-import org.tautline.app.qualify.DemoRun;
-import org.tautline.app.qualify.ResultText;
-import org.tautline.driver.sweep.SweepProgress;
+import org.tautline.app.qualify.QualificationResult;
+import org.tautline.app.ui.project.RecentFiles;
+import org.tautline.app.ui.setup.SetupForm;
+import org.tautline.driver.spi.RigDrivers;
 
 /**
- * The first workbench window: runs the demo qualification on the simulated rig and shows the FRF
- * with the fit, the mode table and the verdict.
- *
- * <p>The sweep and the fit run on a {@link SwingWorker}'s background thread; progress and results
- * come back on the event thread. The stop control (button, Escape) asks the sweep to ramp down.
+ * The workbench window: setup, rig, run and results screens in tabs, the menus, the stop control that is
+ * always visible, and the status bar with the rig's state.
  */
-public final class Workbench {
+public final class Workbench implements WorkbenchParts {
     /** The button that acknowledges the safety cautions and starts the first excitation. */
-    static final String START_CHOICE = "I have read the cautions: start";
-    private final JFrame frame = new JFrame("Tautline - vibration qualification");
-    private final FrfChart chart = new FrfChart();
-    private final JTextArea results = new JTextArea(18, 90);
-    private final JProgressBar progress = new JProgressBar(0, 1000);
-    private final JLabel status = new JLabel("Rig: simulated rig (not connected)");
-    private final JButton runButton = new JButton("Run demo qualification");
-    private final JButton stopButton = new JButton("Stop excitation");
-    private final AtomicBoolean cancelRequested = new AtomicBoolean();
-    private boolean safetyAcknowledged;
+    static final String START_CHOICE = RunController.START_CHOICE;
+    private final JFrame frame = new JFrame("Tautline workbench");
+    private final JTabbedPane tabs = new JTabbedPane();
+    private final StatusBar status = new StatusBar();
+    private final SetupScreen setup;
+    private final RigScreen rig;
+    private final RunScreen run = new RunScreen();
+    private final ResultsScreen results = new ResultsScreen();
+    private final RunController runs;
+    private final FileController files;
 
-    private Workbench() {
+    private Workbench(RigDrivers drivers, RecentFiles recent) {
+        setup = new SetupScreen(SetupForm.demo(), this::edited);
+        runs = new RunController(this, drivers, this::showResult);
+        rig = new RigScreen(drivers, runs::connect, runs::disconnect);
+        files = new FileController(this, runs, recent);
     }
 
-    /** Opens the window on the event thread, with the light look and feel. */
+    /** Opens the window on the event thread, with the look the desktop prefers. */
     public static void open() {
         SwingUtilities.invokeLater(() -> {
-            FlatLightLaf.setup();
-            new Workbench().build().setVisible(true);
+            Themes.setup(Themes.Choice.SYSTEM);
+            new Workbench(RigDrivers.standard(), RecentFiles.inUserConfig()).build().setVisible(true);
         });
     }
 
     /**
-     * Builds the window without showing it; for tests that drive it under a virtual display.
+     * Builds a window without showing it; call on the event thread.
      *
-     * @return the frame, ready to show; must be called on the event thread
+     * @param recent where the recent-files list is kept
+     * @return the workbench
      */
-    public static JFrame buildForTest() {
-        FlatLightLaf.setup();
-        return new Workbench().build();
+    static Workbench create(RecentFiles recent) {
+        Themes.setup(Themes.Choice.LIGHT);
+        Workbench w = new Workbench(RigDrivers.standard(), recent);
+        w.build();
+        return w;
+    }
+
+    @Override
+    public JFrame frame() {
+        return frame;
+    }
+
+    @Override
+    public SetupScreen setup() {
+        return setup;
+    }
+
+    @Override
+    public RigScreen rig() {
+        return rig;
+    }
+
+    @Override
+    public RunScreen run() {
+        return run;
+    }
+
+    @Override
+    public ResultsScreen results() {
+        return results;
+    }
+
+    @Override
+    public StatusBar status() {
+        return status;
+    }
+
+    @Override
+    public void showSetup() {
+        tabs.setSelectedIndex(0);
+    }
+
+    FileController files() {
+        return files;
+    }
+
+    JTabbedPane tabs() {
+        return tabs;
+    }
+
+    private void edited() {
+        files.edited();
+    }
+
+    private void showResult(QualificationResult result) {
+        results.showResults(result);
+        files.resultShown(result);
+        tabs.setSelectedIndex(3);
     }
 
     private JFrame build() {
-        results.setEditable(false);
-        results.setFont(new Font(Font.MONOSPACED, Font.PLAIN, results.getFont().getSize()));
-        results.setText("Press \"Run demo qualification\" to sweep the invented demo wire on the simulated rig.\n");
-        progress.setStringPainted(true);
-        progress.setString("idle");
-        stopButton.setEnabled(false);
-        runButton.setMnemonic(KeyEvent.VK_R);
-        runButton.addActionListener(event -> startRun());
-        stopButton.addActionListener(event -> requestStop());
-        runButton.setName("run");
-        stopButton.setName("stop");
-        results.setName("results");
-
-        JPanel top = new JPanel(new MigLayout("insets 8, fillx", "[][]push[]"));
-        top.add(runButton);
-        top.add(stopButton);
-        top.add(new JLabel("Esc stops the excitation"));
-        JPanel centre = new JPanel(new BorderLayout());
-        JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, chart.panel(), new JScrollPane(results));
-        split.setResizeWeight(0.6);
-        centre.add(split, BorderLayout.CENTER);
-        JPanel bottom = new JPanel(new MigLayout("insets 4 8 4 8, fillx", "[grow,fill][]"));
-        bottom.add(status);
-        bottom.add(progress, "w 420!");
+        tabs.addTab("1 Setup", setup.component());
+        tabs.addTab("2 Rig", rig.component());
+        tabs.addTab("3 Run", run.component());
+        tabs.addTab("4 Results", results.component());
+        int[] keys = {KeyEvent.VK_1, KeyEvent.VK_2, KeyEvent.VK_3, KeyEvent.VK_4};
+        for (int i = 0; i < keys.length; i++) {
+            tabs.setMnemonicAt(i, keys[i]);
+        }
+        tabs.setName("screens");
+        run.start.addActionListener(e -> runs.start());
+        run.pause.addActionListener(e -> runs.pause());
+        run.resume.addActionListener(e -> runs.resume());
+        run.cancel.addActionListener(e -> runs.cancel());
 
         JPanel root = new JPanel(new BorderLayout());
-        root.add(top, BorderLayout.NORTH);
-        root.add(centre, BorderLayout.CENTER);
-        root.add(bottom, BorderLayout.SOUTH);
-        root.getInputMap(JComponent.WHEN_IN_FOCUSED_WINDOW).put(KeyStroke.getKeyStroke(KeyEvent.VK_ESCAPE, 0), "stop");
-        root.getActionMap().put("stop", new AbstractAction() {
-            private static final long serialVersionUID = 1L;
-
+        root.add(stopBar(), BorderLayout.NORTH);
+        root.add(tabs, BorderLayout.CENTER);
+        root.add(status.panel(), BorderLayout.SOUTH);
+        AbstractAction stop = action("Stop excitation", e -> runs.stopExcitation());
+        // Escape is the Stop menu item's accelerator; Ctrl+. is bound here as a second key.
+        InputMapping.bind(root, "stop", stop, KeyStroke.getKeyStroke(KeyEvent.VK_PERIOD, InputEvent.CTRL_DOWN_MASK));
+        frame.setJMenuBar(menus());
+        frame.setContentPane(root);
+        frame.setDefaultCloseOperation(WindowConstants.DO_NOTHING_ON_CLOSE);
+        frame.addWindowListener(new WindowAdapter() {
             @Override
-            public void actionPerformed(java.awt.event.ActionEvent event) {
-                requestStop();
+            public void windowClosing(WindowEvent e) {
+                close();
             }
         });
-        frame.setContentPane(root);
-        frame.setDefaultCloseOperation(WindowConstants.DISPOSE_ON_CLOSE);
         frame.setSize(1280, 800);
         frame.setLocationRelativeTo(null);
         return frame;
     }
 
-    private boolean acknowledgeSafety() {
-        if (safetyAcknowledged) {
-            return true;
-        }
-        String[] choices = {START_CHOICE, "Cancel"};
-        int answer = JOptionPane.showOptionDialog(frame, SafetyNotice.asHtml(true), "Safety: before excitation",
-                JOptionPane.OK_CANCEL_OPTION, JOptionPane.WARNING_MESSAGE, null, choices, choices[1]);
-        safetyAcknowledged = answer == 0;
-        return safetyAcknowledged;
+    private JPanel stopBar() {
+        JPanel bar = new JPanel(new MigLayout("insets 6 10 6 10, fillx", "[]push[][]"));
+        JLabel hint = new JLabel("Set up the specimen, connect the rig, then run. Esc or Ctrl+. stops the excitation.");
+        JButton stop = new JButton("STOP excitation (Esc)");
+        stop.setName("stop");
+        stop.setMnemonic('T');
+        stop.setForeground(Color.WHITE);
+        stop.setBackground(new Color(0xB0, 0x30, 0x00));
+        stop.putClientProperty("JButton.buttonType", "roundRect");
+        stop.addActionListener(e -> runs.stopExcitation());
+        bar.add(hint);
+        bar.add(stop, "h 32!");
+        return bar;
     }
 
-    private void startRun() {
-        if (!acknowledgeSafety()) {
+    private JMenuBar menus() {
+        JMenuBar bar = new JMenuBar();
+        JMenu file = menu("File", 'F');
+        file.add(item("New project", 'N', KeyEvent.VK_N, files::newProject));
+        file.add(item("Open project...", 'O', KeyEvent.VK_O, files::open));
+        file.add(files.recentMenu());
+        file.add(item("Save project", 'S', KeyEvent.VK_S, files::save));
+        file.add(item("Save project as...", 'A', -1, files::saveAs));
+        file.addSeparator();
+        file.add(item("Import FRF (CSV)...", 'I', KeyEvent.VK_I, files::importFrf));
+        file.add(item("Import recording (WAV or CSV)...", 'W', -1, files::importRecording));
+        file.addSeparator();
+        file.add(item("Quit", 'Q', KeyEvent.VK_Q, this::close));
+        JMenu view = menu("View", 'V');
+        ButtonGroup looks = new ButtonGroup();
+        for (Themes.Choice c : Themes.Choice.values()) {
+            JRadioButtonMenuItem item = new JRadioButtonMenuItem(c.label(), c == Themes.Choice.LIGHT);
+            item.setMnemonic(c.label().charAt(0));
+            item.addActionListener(e -> Themes.apply(c));
+            looks.add(item);
+            view.add(item);
+        }
+        JMenu rigMenu = menu("Rig", 'R');
+        rigMenu.add(item("Connect", 'C', -1, runs::connect));
+        rigMenu.add(item("Disconnect", 'D', -1, runs::disconnect));
+        rigMenu.addSeparator();
+        rigMenu.add(item("Start sweep", 'S', KeyEvent.VK_R, runs::start));
+        rigMenu.add(item("Pause", 'P', -1, runs::pause));
+        rigMenu.add(item("Resume", 'u', -1, runs::resume));
+        rigMenu.add(item("Cancel sweep", 'n', -1, runs::cancel));
+        JMenuItem stop = item("Stop excitation", 'x', -1, runs::stopExcitation);
+        stop.setAccelerator(KeyStroke.getKeyStroke(KeyEvent.VK_ESCAPE, 0));
+        rigMenu.add(stop);
+        bar.add(file);
+        bar.add(view);
+        bar.add(rigMenu);
+        return bar;
+    }
+
+    private void close() {
+        if (runs.isRunning()) {
+            runs.stopExcitation();
+            status.message("A sweep was running: the drive is ramping down. Close again once it has stopped.");
             return;
         }
-        cancelRequested.set(false);
-        runButton.setEnabled(false);
-        stopButton.setEnabled(true);
-        chart.clear();
-        results.setText("Sweeping...\n");
-        status.setText("Rig: simulated rig (connected, excitation on)");
-        new DemoWorker().execute();
-    }
-
-    private void requestStop() {
-        if (stopButton.isEnabled()) {
-            cancelRequested.set(true);
-            status.setText("Rig: simulated rig (stopping: ramping the drive down)");
+        if (files.confirmDiscard()) {
+            runs.closeRig();
+            frame.dispose();
         }
     }
 
-    /** Runs the demo off the event thread and publishes each completed step. */
-    private final class DemoWorker extends SwingWorker<DemoOutcome, SweepProgress> {
-        @Override
-        protected DemoOutcome doInBackground() {
-            return DemoRun.run(this::publish, cancelRequested::get);
+    private static JMenu menu(String text, char mnemonic) {
+        JMenu m = new JMenu(text);
+        m.setMnemonic(mnemonic);
+        return m;
+    }
+
+    private static JMenuItem item(String text, char mnemonic, int ctrlKey, Runnable action) {
+        JMenuItem item = new JMenuItem(text, mnemonic);
+        if (ctrlKey >= 0) {
+            item.setAccelerator(KeyStroke.getKeyStroke(ctrlKey, InputEvent.CTRL_DOWN_MASK));
+        }
+        item.addActionListener(e -> action.run());
+        return item;
+    }
+
+    private static AbstractAction action(String name, java.util.function.Consumer<ActionEvent> body) {
+        return new AbstractAction(name) {
+            private static final long serialVersionUID = 1L;
+
+            @Override
+            public void actionPerformed(ActionEvent e) {
+                body.accept(e);
+            }
+        };
+    }
+
+    /** Key bindings that work wherever the focus is in the window. */
+    private static final class InputMapping {
+        private InputMapping() {
         }
 
-        @Override
-        protected void process(List<SweepProgress> steps) {
-            double[] frequencies = new double[steps.size()];
-            double[] magnitudes = new double[steps.size()];
-            for (int i = 0; i < steps.size(); i++) {
-                frequencies[i] = steps.get(i).frequencyHz();
-                magnitudes[i] = steps.get(i).point().response().norm();
+        static void bind(JComponent root, String name, AbstractAction action, KeyStroke... keys) {
+            for (KeyStroke k : keys) {
+                root.getInputMap(JComponent.WHEN_IN_FOCUSED_WINDOW).put(k, name);
             }
-            chart.addMeasuredPoints(frequencies, magnitudes);
-            SweepProgress last = steps.get(steps.size() - 1);
-            progress.setValue((int) Math.round(1000 * last.fraction()));
-            String eta = Double.isFinite(last.remainingWallTimeS())
-                    ? String.format(Locale.ROOT, "%.0f s", last.remainingWallTimeS()) : "?";
-            progress.setString(String.format(Locale.ROOT, "step %d of %d  |  %.1f Hz  |  ETA %s", last.completedSteps(),
-                    last.totalSteps(), last.frequencyHz(), eta));
-        }
-
-        @Override
-        protected void done() {
-            runButton.setEnabled(true);
-            stopButton.setEnabled(false);
-            status.setText("Rig: simulated rig (connected, excitation off)");
-            try {
-                DemoOutcome outcome = get();
-                chart.showMeasured(outcome.result().receptance());
-                chart.showFit(outcome.result().synthesized());
-                results.setText(ResultText.format(outcome));
-                results.setCaretPosition(0);
-                progress.setValue(1000);
-                progress.setString(outcome.result().sweep().map(s -> s.completed()).orElse(true) ? "done" : "stopped");
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-            } catch (CancellationException e) {
-                progress.setString("stopped");
-            } catch (ExecutionException e) {
-                progress.setString("failed");
-                results.setText("The run failed: " + e.getCause().getMessage() + "\nThe excitation was switched off.\n");
-            }
+            root.getActionMap().put(name, action);
         }
     }
 }

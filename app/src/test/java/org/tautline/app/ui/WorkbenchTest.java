@@ -1,169 +1,123 @@
 package org.tautline.app.ui;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.junit.jupiter.api.Assertions.fail;
+import static org.tautline.app.ui.SwingDriver.find;
+import static org.tautline.app.ui.SwingDriver.onEdt;
+import static org.tautline.app.ui.SwingDriver.shoot;
+import static org.tautline.app.ui.SwingDriver.waitFor;
 
-import java.awt.Component;
-import java.awt.Container;
-import java.awt.GraphicsEnvironment;
-import java.awt.Window;
-import java.awt.image.BufferedImage;
-import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.concurrent.TimeUnit;
-import java.util.concurrent.atomic.AtomicReference;
 
-import javax.imageio.ImageIO;
 import javax.swing.AbstractButton;
 import javax.swing.JDialog;
 import javax.swing.JFrame;
+import javax.swing.JLabel;
+import javax.swing.JProgressBar;
 import javax.swing.JTextArea;
+import javax.swing.JTextField;
 import javax.swing.SwingUtilities;
 
-import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.tautline.app.ui.project.RecentFiles;
 
-/** Drives the window through a demo qualification on a real (virtual) display and saves screenshots. */
+/**
+ * Drives the window through a whole demo qualification on the simulated rig (setup, connect, run
+ * with a pause and a resume, results, verdict) on a real (virtual) display, saving a screenshot of each screen.
+ */
 class WorkbenchTest {
-    private static final Path SHOTS = Path.of("target", "screenshots");
+    @TempDir
+    Path home;
 
     @BeforeAll
     static void needsADisplay() {
-        if (GraphicsEnvironment.isHeadless()) {
-            if (System.getenv("CI") != null) {
-                fail("CI must provide a display (Xvfb) for the workbench tests: DISPLAY=" + System.getenv("DISPLAY"));
-            }
-            Assumptions.abort("no display: the workbench tests need one (run them under Xvfb)");
-        }
+        SwingDriver.needDisplay();
     }
 
     @Test
-    void runsTheDemoFromTheWindowAndShowsTheVerdict() throws Exception {
-        AtomicReference<JFrame> frame = new AtomicReference<>();
-        SwingUtilities.invokeAndWait(() -> {
-            JFrame f = Workbench.buildForTest();
-            f.setVisible(true);
-            frame.set(f);
+    void qualifiesTheDemoWireFromConnectToVerdictWithoutStallingTheEventThread() throws Exception {
+        Workbench w = onEdt(() -> {
+            Workbench wb = Workbench.create(new RecentFiles(home.resolve("recent.txt")));
+            wb.frame().setVisible(true);
+            return wb;
         });
+        JFrame frame = w.frame();
         try {
-            shoot(frame.get(), "1-start.png");
-            AbstractButton run = find(frame.get(), AbstractButton.class, "run");
-            // The click opens the modal safety dialog; it blocks that event, so click from a later one.
-            SwingUtilities.invokeLater(run::doClick);
-            JDialog safety = waitForDialog();
-            shoot(safety, "2-safety.png");
-            AbstractButton ok = findByText(safety, Workbench.START_CHOICE);
+            shoot(frame, "1-setup.png");
+            JTextField span = find(frame, JTextField.class, "lengthM");
+            JLabel spanProblem = find(frame, JLabel.class, "problem.lengthM");
+            SwingUtilities.invokeAndWait(() -> span.setText("-0.6"));
+            waitFor("the inline message on the span", 2, spanProblem::isVisible);
+            assertEquals("<html>got '-0.6'; expected a positive number of m</html>", onEdt(spanProblem::getText));
+            shoot(frame, "1b-setup-invalid.png");
+            SwingUtilities.invokeAndWait(() -> span.setText("0.6"));
+            waitFor("the span message to go", 2, () -> !spanProblem.isVisible());
+
+            SwingUtilities.invokeAndWait(() -> w.tabs().setSelectedIndex(1));
+            AbstractButton connect = find(frame, AbstractButton.class, "connect");
+            SwingUtilities.invokeAndWait(connect::doClick);
+            AbstractButton disconnect = find(frame, AbstractButton.class, "disconnect");
+            waitFor("the simulated rig to connect", 10, disconnect::isEnabled);
+            JTextArea identity = find(frame, JTextArea.class, "rigIdentity");
+            String health = onEdt(identity::getText);
+            assertTrue(health.contains("Health: ready"), health);
+            shoot(frame, "2-rig.png");
+
+            SwingUtilities.invokeAndWait(() -> w.tabs().setSelectedIndex(2));
+            AbstractButton start = find(frame, AbstractButton.class, "start");
+            // The click opens the modal safety dialog, which blocks that event: click from a later one.
+            SwingUtilities.invokeLater(start::doClick);
+            JDialog safety = SwingDriver.waitForDialog("Safety: before excitation");
+            shoot(safety, "3-safety.png");
+            AbstractButton ok = SwingDriver.findButtonByText(safety, Workbench.START_CHOICE);
+            JProgressBar progress = find(frame, JProgressBar.class, "runProgress");
+            AbstractButton pause = find(frame, AbstractButton.class, "pause");
+            AbstractButton resume = find(frame, AbstractButton.class, "resume");
+            // Screenshots paint on the event thread, so none is taken while the watchdog measures.
             SwingUtilities.invokeAndWait(ok::doClick);
-            JTextArea results = find(frame.get(), JTextArea.class, "results");
-            long started = System.nanoTime();
-            long deadline = started + TimeUnit.SECONDS.toNanos(180);
-            String text = "";
-            boolean runningShot = false;
-            while (System.nanoTime() < deadline) {
-                text = onEdt(results::getText);
-                if (text.contains("Verdict")) {
-                    break;
-                }
-                if (!runningShot && System.nanoTime() - started > TimeUnit.SECONDS.toNanos(2)) {
-                    shoot(frame.get(), "3-running.png");
-                    runningShot = true;
-                }
-                Thread.sleep(100);
+            // Measured from the first steps on, once the sweep is under way.
+            waitFor("the first steps", 30, () -> progress.getValue() > 20);
+            try (EdtWatchdog watchdog = new EdtWatchdog(20).start()) {
+                waitFor("a few hundred steps", 30, () -> progress.getValue() > 300);
+                SwingUtilities.invokeAndWait(pause::doClick);
+                waitFor("the pause to ramp down", 10, resume::isEnabled);
+                assertNoStall(watchdog);
             }
+            String paused = onEdt(progress::getString);
+            assertTrue(paused.startsWith("paused after "), paused);
+            shoot(frame, "4-run-paused.png");
+            try (EdtWatchdog watchdog = new EdtWatchdog(20).start()) {
+                SwingUtilities.invokeAndWait(resume::doClick);
+                waitFor("the sweep to go on", 10, () -> progress.getString().startsWith("step "));
+                waitFor("the last step", 60, () -> progress.getValue() == progress.getMaximum());
+                assertNoStall(watchdog);
+            }
+            JTextArea results = find(frame, JTextArea.class, "results");
+            waitFor("the verdict", 60, () -> results.getText().contains("Verdict"));
+            String text = onEdt(results::getText);
             assertTrue(text.contains("Verdict: PASS"), text);
-            shoot(frame.get(), "4-results.png");
+            assertEquals(3, (int) onEdt(() -> w.tabs().getSelectedIndex()));
+            shoot(frame, "6-results.png");
+            SwingUtilities.invokeAndWait(() -> Themes.apply(Themes.Choice.DARK));
+            shoot(frame, "7-results-dark.png");
+            SwingUtilities.invokeAndWait(() -> w.tabs().setSelectedIndex(2));
+            shoot(frame, "8-run-dark.png");
+            SwingUtilities.invokeAndWait(() -> Themes.apply(Themes.Choice.LIGHT));
         } finally {
-            SwingUtilities.invokeAndWait(() -> frame.get().dispose());
-        }
-    }
-
-    private static JDialog waitForDialog() throws Exception {
-        long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(10);
-        while (System.nanoTime() < deadline) {
-            JDialog dialog = onEdt(() -> {
-                for (Window w : Window.getWindows()) {
-                    if (w instanceof JDialog && w.isShowing()) {
-                        return (JDialog) w;
-                    }
-                }
-                return null;
+            SwingUtilities.invokeAndWait(() -> {
+                w.files().edited();
+                frame.dispose();
             });
-            if (dialog != null) {
-                return dialog;
-            }
-            Thread.sleep(50);
-        }
-        throw new AssertionError("the safety cautions were not shown before excitation");
-    }
-
-    private static <T> T onEdt(java.util.concurrent.Callable<T> call) throws Exception {
-        AtomicReference<T> result = new AtomicReference<>();
-        AtomicReference<Exception> error = new AtomicReference<>();
-        SwingUtilities.invokeAndWait(() -> {
-            try {
-                result.set(call.call());
-            } catch (Exception e) {
-                error.set(e);
-            }
-        });
-        if (error.get() != null) {
-            throw error.get();
-        }
-        return result.get();
-    }
-
-    private static <T extends Component> T find(Container root, Class<T> type, String name) {
-        for (Component c : root.getComponents()) {
-            if (type.isInstance(c) && name.equals(c.getName())) {
-                return type.cast(c);
-            }
-            if (c instanceof Container) {
-                T inner = findOrNull((Container) c, type, name);
-                if (inner != null) {
-                    return inner;
-                }
-            }
-        }
-        throw new AssertionError("no " + type.getSimpleName() + " named '" + name + "' in the window");
-    }
-
-    private static <T extends Component> T findOrNull(Container root, Class<T> type, String name) {
-        try {
-            return find(root, type, name);
-        } catch (AssertionError e) {
-            return null;
         }
     }
 
-    private static AbstractButton findByText(Container root, String text) {
-        for (Component c : root.getComponents()) {
-            if (c instanceof AbstractButton && text.equals(((AbstractButton) c).getText())) {
-                return (AbstractButton) c;
-            }
-            if (c instanceof Container) {
-                try {
-                    return findByText((Container) c, text);
-                } catch (AssertionError e) {
-                    // keep looking in the siblings
-                }
-            }
-        }
-        throw new AssertionError("no button '" + text + "'");
-    }
-
-    private static void shoot(Window window, String name) throws Exception {
-        BufferedImage image = onEdt(() -> {
-            BufferedImage img = new BufferedImage(window.getWidth(), window.getHeight(), BufferedImage.TYPE_INT_RGB);
-            window.paintAll(img.getGraphics());
-            return img;
-        });
-        try {
-            Files.createDirectories(SHOTS);
-            ImageIO.write(image, "png", SHOTS.resolve(name).toFile());
-        } catch (IOException e) {
-            throw new AssertionError("could not save the screenshot " + name + ": " + e.getMessage(), e);
-        }
+    private static void assertNoStall(EdtWatchdog watchdog) {
+        assertTrue(watchdog.probeCount() > 20, "the watchdog ran " + watchdog.probeCount() + " probes");
+        System.out.printf(java.util.Locale.ROOT, "event thread: longest stall %.1f ms, longest delay of any kind %.1f ms,"
+                + " %d probes%n", watchdog.longestStallMs(), watchdog.longestDelayMs(), watchdog.probeCount());
+        assertTrue(watchdog.longestStallMs() < 100, "the event thread stalled for " + watchdog.longestStallMs()
+                + " ms during the sweep; it was at" + watchdog.stackAtLongestStall());
     }
 }

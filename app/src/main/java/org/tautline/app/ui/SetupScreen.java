@@ -1,0 +1,241 @@
+package org.tautline.app.ui;
+
+import java.awt.Color;
+import java.util.LinkedHashMap;
+import java.util.Map;
+
+import javax.swing.JButton;
+import javax.swing.JComboBox;
+import javax.swing.JComponent;
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.JScrollPane;
+import javax.swing.JTextField;
+import javax.swing.UIManager;
+import javax.swing.event.DocumentEvent;
+import javax.swing.event.DocumentListener;
+import javax.swing.text.JTextComponent;
+
+import net.miginfocom.swing.MigLayout;
+import org.tautline.app.ui.setup.MaterialPreset;
+import org.tautline.app.ui.setup.SetupField;
+import org.tautline.app.ui.setup.SetupForm;
+
+/**
+ * The setup screen: specimen, sweep plan and specification limits in three columns, with a message under
+ * any field that is wrong (what was typed, what was expected).
+ */
+final class SetupScreen {
+    private final JPanel panel = new JPanel(new MigLayout("insets 10, gapx 32, hidemode 3", "[][]push", "[top]"));
+    private final Map<String, JComponent> editors = new LinkedHashMap<>();
+    private final Map<String, JLabel> messages = new LinkedHashMap<>();
+    private final Runnable onEdit;
+    private SetupForm form;
+    private boolean filling;
+
+    /** @param onEdit called on the event thread after every edit */
+    SetupScreen(SetupForm form, Runnable onEdit) {
+        this.form = form;
+        this.onEdit = onEdit;
+        JPanel left = new JPanel(new MigLayout("insets 0, wrap 1, gapy 12"));
+        left.add(section(SetupField.Section.SPECIMEN));
+        left.add(section(SetupField.Section.SENSORS));
+        JPanel right = new JPanel(new MigLayout("insets 0, wrap 1, gapy 12"));
+        right.add(section(SetupField.Section.PLAN));
+        right.add(limitsSection());
+        panel.add(left);
+        panel.add(right);
+        validate();
+    }
+
+    JComponent component() {
+        JScrollPane scroll = new JScrollPane(panel);
+        scroll.setBorder(null);
+        scroll.getVerticalScrollBar().setUnitIncrement(16);
+        return scroll;
+    }
+
+    SetupForm form() {
+        return form;
+    }
+
+    /** Shows another form's values (after New or Open). */
+    void show(SetupForm newForm) {
+        form = newForm;
+        filling = true;
+        try {
+            newForm.values().forEach((key, text) -> {
+                JComponent editor = editors.get(key);
+                if (editor instanceof JTextComponent t) {
+                    t.setText(text);
+                } else if (editor instanceof JComboBox<?> c) {
+                    c.setSelectedItem(text);
+                }
+            });
+        } finally {
+            filling = false;
+        }
+        validate();
+    }
+
+    private JPanel section(SetupField.Section section) {
+        JPanel p = new JPanel(new MigLayout("insets 0, wrap 3, gapy 2, hidemode 3", "[right][grow,fill,100:140:][]"));
+        JLabel title = new JLabel(section.title());
+        title.putClientProperty("FlatLaf.styleClass", "h3");
+        p.add(title, "span 3, left, gapbottom 6");
+        if (section == SetupField.Section.SPECIMEN) {
+            addMaterialPreset(p);
+        }
+        for (SetupField f : form.fields()) {
+            if (f.section() != section) {
+                continue;
+            }
+            JLabel label = new JLabel(f.label());
+            JComponent editor = editor(f);
+            label.setLabelFor(editor);
+            p.add(label);
+            p.add(editor);
+            p.add(new JLabel(f.unit()));
+            p.add(problemLabel(f), "skip 1, span 2, wmax 340, gapbottom 4");
+        }
+        return p;
+    }
+
+    /** The limits as one row each: lower bound, upper bound, unit; an empty bound means none. */
+    private JPanel limitsSection() {
+        JPanel p = new JPanel(new MigLayout("insets 0, wrap 5, gapy 2, hidemode 3", "[right][90:110:][center][90:110:][]"));
+        JLabel title = new JLabel(SetupField.Section.LIMITS.title());
+        title.putClientProperty("FlatLaf.styleClass", "h3");
+        p.add(title, "span 5, left, gapbottom 6");
+        p.add(new JLabel("<html><small>an empty bound means none</small></html>"), "skip 1, span 4, left");
+        java.util.List<SetupField> limits = form.fields().stream()
+                .filter(f -> f.section() == SetupField.Section.LIMITS).toList();
+        for (int i = 0; i + 1 < limits.size(); i += 2) {
+            SetupField lower = limits.get(i);
+            SetupField upper = limits.get(i + 1);
+            JLabel label = new JLabel(lower.label().replaceFirst(": at least$", ""));
+            JComponent lowerEditor = editor(lower);
+            label.setLabelFor(lowerEditor);
+            p.add(label);
+            p.add(lowerEditor, "growx");
+            p.add(new JLabel("to"));
+            p.add(editor(upper), "growx");
+            p.add(new JLabel(upper.unit()));
+            for (SetupField f : java.util.List.of(lower, upper)) {
+                JLabel message = problemLabel(f);
+                p.add(message, "skip 1, span 4, wmax 380, gapbottom 4");
+            }
+        }
+        return p;
+    }
+
+    private JLabel problemLabel(SetupField f) {
+        JLabel message = new JLabel();
+        message.setName("problem." + f.key());
+        message.setForeground(errorColour());
+        message.setVisible(false);
+        messages.put(f.key(), message);
+        return message;
+    }
+
+    private void addMaterialPreset(JPanel p) {
+        JComboBox<MaterialPreset> material = new JComboBox<>(MaterialPreset.all().toArray(new MaterialPreset[0]));
+        material.setName("material");
+        JTextField diameter = new JTextField("0.0005", 6);
+        diameter.setName("diameterM");
+        JButton apply = new JButton("Fill from material");
+        apply.setMnemonic('F');
+        JLabel problem = new JLabel();
+        problem.setForeground(errorColour());
+        apply.addActionListener(e -> {
+            try {
+                double d = Double.parseDouble(diameter.getText().trim());
+                SetupForm f = form;
+                f.applyMaterial((MaterialPreset) material.getSelectedItem(), d);
+                show(f);
+                problem.setText("");
+                onEdit.run();
+            } catch (IllegalArgumentException ex) {
+                problem.setText("Diameter: got '" + diameter.getText() + "'; expected a positive number of m");
+            }
+        });
+        JLabel materialLabel = new JLabel("Material preset");
+        materialLabel.setLabelFor(material);
+        materialLabel.setDisplayedMnemonic('M');
+        p.add(materialLabel);
+        p.add(material, "span 2, wmax 300");
+        p.add(new JLabel("Wire diameter"));
+        p.add(diameter);
+        p.add(new JLabel("m"));
+        p.add(apply, "skip 1, span 2, split 2");
+        p.add(new JLabel("<html><small>handbook values, see Material</small></html>"));
+        p.add(problem, "skip 1, span 2, gapbottom 8");
+    }
+
+    private JComponent editor(SetupField f) {
+        JComponent editor;
+        if (f.kind() == SetupField.Kind.CHOICE) {
+            JComboBox<String> box = new JComboBox<>(f.choices().toArray(new String[0]));
+            box.setSelectedItem(form.value(f.key()));
+            box.addActionListener(e -> edited(f.key(), (String) box.getSelectedItem()));
+            editor = box;
+        } else {
+            JTextField field = new JTextField(form.value(f.key()), 10);
+            field.getDocument().addDocumentListener(new DocumentListener() {
+                @Override
+                public void insertUpdate(DocumentEvent e) {
+                    edited(f.key(), field.getText());
+                }
+
+                @Override
+                public void removeUpdate(DocumentEvent e) {
+                    edited(f.key(), field.getText());
+                }
+
+                @Override
+                public void changedUpdate(DocumentEvent e) {
+                    edited(f.key(), field.getText());
+                }
+            });
+            editor = field;
+        }
+        editor.setName(f.key());
+        editors.put(f.key(), editor);
+        return editor;
+    }
+
+    private void edited(String key, String text) {
+        if (filling) {
+            return;
+        }
+        if (form.set(key, text)) {
+            validate();
+            onEdit.run();
+        }
+    }
+
+    /** Shows the form's problems beside their fields; returns true when there are none. */
+    boolean validate() {
+        Map<String, String> problems = form.problems();
+        messages.forEach((key, label) -> {
+            String problem = problems.get(key);
+            label.setVisible(problem != null);
+            label.setText(problem == null ? "" : "<html>" + escape(problem) + "</html>");
+            JComponent editor = editors.get(key);
+            if (editor != null) {
+                editor.putClientProperty("JComponent.outline", problem == null ? null : "error");
+            }
+        });
+        panel.revalidate();
+        return problems.isEmpty();
+    }
+
+    private static String escape(String text) {
+        return text.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
+    }
+
+    private static Color errorColour() {
+        Color c = UIManager.getColor("Component.error.focusedBorderColor");
+        return c == null ? new Color(0xB0, 0x30, 0x00) : c;
+    }
+}

@@ -1,0 +1,62 @@
+package org.tautline.app.ui;
+
+import static org.tautline.app.ui.SwingDriver.find;
+import static org.tautline.app.ui.SwingDriver.onEdt;
+import static org.tautline.app.ui.SwingDriver.shoot;
+import static org.tautline.app.ui.SwingDriver.waitFor;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+
+import javax.swing.AbstractButton;
+import javax.swing.JDialog;
+import javax.swing.JTextArea;
+import javax.swing.SwingUtilities;
+
+import org.tautline.app.ui.project.RecentFiles;
+
+/**
+ * Run in a child JVM at 200 % scale ({@code -Dsun.java2d.uiScale=2}) by {@link HiDpiScreenshotTest}: qualifies
+ * the demo wire and saves each screen with an {@code hidpi-} prefix. Exits 0 when the verdict was shown.
+ */
+public final class HiDpiScreenshots {
+    private HiDpiScreenshots() {
+    }
+
+    public static void main(String[] args) throws Exception {
+        Path recent = Files.createTempDirectory("tautline-hidpi").resolve("recent.txt");
+        Workbench w = onEdt(() -> {
+            Workbench wb = Workbench.create(new RecentFiles(recent));
+            wb.frame().setVisible(true);
+            return wb;
+        });
+        try {
+            // A shorter sweep than the demo's 1061 steps keeps this run brief; the screens are the same.
+            javax.swing.JTextField steps = find(w.frame(), javax.swing.JTextField.class, "stepCount");
+            SwingUtilities.invokeAndWait(() -> steps.setText("400"));
+            Thread.sleep(300);
+            shoot(w.frame(), "hidpi-1-setup.png");
+            SwingUtilities.invokeAndWait(() -> w.tabs().setSelectedIndex(1));
+            AbstractButton connect = find(w.frame(), AbstractButton.class, "connect");
+            SwingUtilities.invokeAndWait(connect::doClick);
+            AbstractButton disconnect = find(w.frame(), AbstractButton.class, "disconnect");
+            waitFor("the rig", 10, disconnect::isEnabled);
+            shoot(w.frame(), "hidpi-2-rig.png");
+            SwingUtilities.invokeAndWait(() -> w.tabs().setSelectedIndex(2));
+            AbstractButton start = find(w.frame(), AbstractButton.class, "start");
+            SwingUtilities.invokeLater(start::doClick);
+            JDialog safety = SwingDriver.waitForDialog("Safety: before excitation");
+            shoot(safety, "hidpi-3-safety.png");
+            AbstractButton ok = SwingDriver.findButtonByText(safety, Workbench.START_CHOICE);
+            SwingUtilities.invokeAndWait(ok::doClick);
+            Thread.sleep(1500);
+            shoot(w.frame(), "hidpi-4-run.png");
+            JTextArea results = find(w.frame(), JTextArea.class, "results");
+            waitFor("the verdict", 60, () -> results.getText().contains("Verdict"));
+            shoot(w.frame(), "hidpi-5-results.png");
+        } finally {
+            SwingUtilities.invokeAndWait(() -> w.frame().dispose());
+        }
+        System.exit(0);
+    }
+}

@@ -1,0 +1,145 @@
+package org.tautline.app.ui;
+
+import java.awt.Component;
+import java.awt.Container;
+import java.awt.GraphicsEnvironment;
+import java.awt.Window;
+import java.awt.image.BufferedImage;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.atomic.AtomicReference;
+import java.util.function.BooleanSupplier;
+
+import javax.imageio.ImageIO;
+import javax.swing.AbstractButton;
+import javax.swing.JDialog;
+import javax.swing.SwingUtilities;
+
+import org.junit.jupiter.api.Assumptions;
+
+/** Finding components, waiting on the event thread and saving screenshots, for the workbench tests. */
+final class SwingDriver {
+    static final Path SHOTS = Path.of("target", "screenshots");
+
+    private SwingDriver() {
+    }
+
+    /** Skips locally without a display; fails under CI, which must provide one. */
+    static void needDisplay() {
+        if (GraphicsEnvironment.isHeadless()) {
+            if (System.getenv("CI") != null) {
+                throw new AssertionError("CI must provide a display (Xvfb) for the workbench tests: DISPLAY="
+                        + System.getenv("DISPLAY"));
+            }
+            Assumptions.abort("no display: the workbench tests need one (run them under Xvfb)");
+        }
+    }
+
+    static <T> T onEdt(Callable<T> call) throws Exception {
+        AtomicReference<T> result = new AtomicReference<>();
+        AtomicReference<Exception> error = new AtomicReference<>();
+        SwingUtilities.invokeAndWait(() -> {
+            try {
+                result.set(call.call());
+            } catch (Exception e) {
+                error.set(e);
+            }
+        });
+        if (error.get() != null) {
+            throw error.get();
+        }
+        return result.get();
+    }
+
+    static void waitFor(String what, double seconds, Callable<Boolean> condition) throws Exception {
+        long deadline = System.nanoTime() + (long) (seconds * 1e9);
+        while (System.nanoTime() < deadline) {
+            if (onEdt(condition)) {
+                return;
+            }
+            Thread.sleep(50);
+        }
+        throw new AssertionError("timed out after " + seconds + " s waiting for " + what);
+    }
+
+    static JDialog waitForDialog(String title) throws Exception {
+        AtomicReference<JDialog> found = new AtomicReference<>();
+        waitFor("the dialog '" + title + "'", 10, () -> {
+            for (Window w : Window.getWindows()) {
+                if (w instanceof JDialog d && w.isShowing() && title.equals(d.getTitle())) {
+                    found.set(d);
+                    return true;
+                }
+            }
+            return false;
+        });
+        return found.get();
+    }
+
+    static <T extends Component> T find(Container root, Class<T> type, String name) {
+        T found = findOrNull(root, type, c -> name.equals(c.getName()));
+        if (found == null) {
+            throw new AssertionError("no " + type.getSimpleName() + " named '" + name + "' in the window");
+        }
+        return found;
+    }
+
+    static AbstractButton findButtonByText(Container root, String text) {
+        AbstractButton b = findOrNull(root, AbstractButton.class, c -> text.equals(((AbstractButton) c).getText()));
+        if (b == null) {
+            throw new AssertionError("no button '" + text + "'");
+        }
+        return b;
+    }
+
+    private static <T extends Component> T findOrNull(Container root, Class<T> type,
+                                                      java.util.function.Predicate<Component> match) {
+        for (Component c : root.getComponents()) {
+            if (type.isInstance(c) && match.test(c)) {
+                return type.cast(c);
+            }
+            if (c instanceof Container inner) {
+                T found = findOrNull(inner, type, match);
+                if (found != null) {
+                    return found;
+                }
+            }
+        }
+        return null;
+    }
+
+    /** Paints a window into an image at the screen's scale and saves it as PNG. */
+    static void shoot(Window window, String name) throws Exception {
+        BufferedImage image = onEdt(() -> {
+            double scale = window.getGraphicsConfiguration().getDefaultTransform().getScaleX();
+            int w = (int) Math.round(window.getWidth() * scale);
+            int h = (int) Math.round(window.getHeight() * scale);
+            BufferedImage img = new BufferedImage(w, h, BufferedImage.TYPE_INT_RGB);
+            java.awt.Graphics2D g = img.createGraphics();
+            g.scale(scale, scale);
+            window.paintAll(g);
+            g.dispose();
+            return img;
+        });
+        try {
+            Files.createDirectories(SHOTS);
+            ImageIO.write(image, "png", SHOTS.resolve(name).toFile());
+        } catch (IOException e) {
+            throw new AssertionError("could not save the screenshot " + name + ": " + e.getMessage(), e);
+        }
+    }
+
+    static boolean poll(BooleanSupplier s, long timeoutMs) throws InterruptedException {
+        long deadline = System.nanoTime() + TimeUnit.MILLISECONDS.toNanos(timeoutMs);
+        while (System.nanoTime() < deadline) {
+            if (s.getAsBoolean()) {
+                return true;
+            }
+            Thread.sleep(20);
+        }
+        return false;
+    }
+}
