@@ -46,12 +46,14 @@ public final class Workbench implements WorkbenchParts {
     private final ResultsScreen results = new ResultsScreen();
     private final RunController runs;
     private final FileController files;
+    private final ExportController exports;
 
     private Workbench(RigDrivers drivers, RecentFiles recent) {
         setup = new SetupScreen(SetupForm.demo(), this::edited);
         runs = new RunController(this, drivers, this::showResult);
         rig = new RigScreen(drivers, runs::connect, runs::disconnect);
         files = new FileController(this, runs, recent);
+        exports = new ExportController(this);
     }
 
     /** Opens the window on the event thread, with the look the desktop prefers. */
@@ -125,6 +127,7 @@ public final class Workbench implements WorkbenchParts {
     private void showResult(QualificationResult result) {
         results.showResults(result);
         files.resultShown(result);
+        exports.resultShown(result);
         tabs.setSelectedIndex(3);
     }
 
@@ -190,6 +193,9 @@ public final class Workbench implements WorkbenchParts {
         file.addSeparator();
         file.add(item("Import FRF (CSV)...", 'I', KeyEvent.VK_I, files::importFrf));
         file.add(item("Import recording (WAV or CSV)...", 'W', -1, files::importRecording));
+        file.addSeparator();
+        file.add(item("Export report (PDF)...", 'E', KeyEvent.VK_E, exports::exportReport));
+        file.add(item("Export results (CSV and JSON)...", 'x', -1, exports::exportResults));
         file.addSeparator();
         file.add(item("Quit", 'Q', KeyEvent.VK_Q, this::close));
         JMenu view = menu("View", 'V');
