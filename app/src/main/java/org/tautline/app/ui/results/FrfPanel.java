@@ -96,7 +96,12 @@ final class FrfPanel {
             }
             if (model.magnitude(i) > 0) {
                 fit.add(model.frequencyHz(i), model.magnitude(i), false);
-                phaseFit.add(model.frequencyHz(i), phaseDegrees(model, i), false);
+                double deg = phaseDegrees(model, i);
+                if (i > 0 && Math.abs(deg - phaseDegrees(model, i - 1)) > 180) {
+                    // A wrap from +180 to -180: break the line rather than draw a vertical stroke across the plot.
+                    phaseFit.add(0.5 * (model.frequencyHz(i - 1) + model.frequencyHz(i)), null, false);
+                }
+                phaseFit.add(model.frequencyHz(i), deg, false);
             }
         }
         measured.fireSeriesChanged();
