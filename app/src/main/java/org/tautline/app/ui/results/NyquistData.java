@@ -9,6 +9,7 @@ import org.tautline.analysis.AnalysisException;
 import org.tautline.analysis.frf.Frf;
 import org.tautline.analysis.frf.FrfQuantity;
 import org.tautline.analysis.modal.CircleFit;
+import org.tautline.analysis.modal.ModalSynthesis;
 import org.tautline.analysis.modal.Mode;
 
 /**
@@ -19,7 +20,7 @@ import org.tautline.analysis.modal.Mode;
  * The band is the mode's frequency +- {@value #HALF_POWER_BANDWIDTHS} half-power bandwidths 2 zeta f.
  *
  * @param measured measured mobility at the lines in the band, m/(N s)
- * @param model the fitted model's mobility at the same lines, m/(N s)
+ * @param model the fitted model's mobility (its modes, without residual terms) on a fine grid over the band, m/(N s)
  * @param circle the circle fitted to the measured lines, absent when the band holds too few lines or the fit failed
  * @param fromHz lower edge of the band, Hz
  * @param toHz upper edge of the band, Hz
@@ -27,19 +28,25 @@ import org.tautline.analysis.modal.Mode;
 record NyquistData(List<Complex> measured, List<Complex> model, Optional<CircleFit> circle, double fromHz, double toHz) {
     /** Half-width of the band in half-power bandwidths. */
     static final double HALF_POWER_BANDWIDTHS = 2.0;
+    /** Points of the model's curve. */
+    static final int MODEL_POINTS = 200;
 
     /**
      * @param receptance the measured receptance
-     * @param synthesized the model's receptance at the same lines
+     * @param modes the fitted model's modes
      * @param mode the mode to look at
      * @return the data, empty bands when no line lies near the mode
      */
-    static NyquistData around(Frf receptance, Frf synthesized, Mode mode) {
+    static NyquistData around(Frf receptance, List<Mode> modes, Mode mode) {
         double halfWidthHz = HALF_POWER_BANDWIDTHS * 2 * mode.dampingRatio() * mode.frequencyHz();
         double from = mode.frequencyHz() - Math.max(halfWidthHz, 1e-3 * mode.frequencyHz());
         double to = mode.frequencyHz() + Math.max(halfWidthHz, 1e-3 * mode.frequencyHz());
         List<Complex> measured = band(receptance.toQuantity(FrfQuantity.MOBILITY), from, to);
-        List<Complex> model = band(synthesized.toQuantity(FrfQuantity.MOBILITY), from, to);
+        double[] grid = new double[MODEL_POINTS];
+        for (int k = 0; k < MODEL_POINTS; k++) {
+            grid[k] = from + (to - from) * k / (MODEL_POINTS - 1.0);
+        }
+        List<Complex> model = band(ModalSynthesis.synthesize(modes, grid, FrfQuantity.MOBILITY), from, to);
         Optional<CircleFit> circle;
         try {
             circle = measured.size() >= 4 ? Optional.of(CircleFit.of(receptance, from, to)) : Optional.empty();

@@ -28,7 +28,7 @@ final class PropertiesPanel {
         }
     };
     private final JTextArea reasons = new JTextArea();
-    private final JPanel component = new JPanel(new MigLayout("fill, wrap 1", "[grow, fill]", "[][][grow 40, fill][][grow 60, fill]"));
+    private final JPanel component = new JPanel(new MigLayout("fill, wrap 1", "[grow, fill]", "[][][grow 30, fill][][grow 70, fill]"));
 
     PropertiesPanel() {
         JTable table = new JTable(verdict);

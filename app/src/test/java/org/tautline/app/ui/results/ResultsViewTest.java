@@ -68,12 +68,19 @@ class ResultsViewTest {
             BufferedImage image = onEdt(() -> {
                 view.tabs().setSelectedIndex(index);
                 frame.validate();
-                BufferedImage img = new BufferedImage(frame.getWidth(), frame.getHeight(), BufferedImage.TYPE_INT_RGB);
-                frame.paintAll(img.getGraphics());
+                // At a UI scale above 1 (-Dsun.java2d.uiScale=2) the image keeps the device pixels.
+                double scale = frame.getGraphicsConfiguration().getDefaultTransform().getScaleX();
+                BufferedImage img = new BufferedImage((int) Math.round(frame.getWidth() * scale),
+                        (int) Math.round(frame.getHeight() * scale), BufferedImage.TYPE_INT_RGB);
+                java.awt.Graphics2D g = img.createGraphics();
+                g.scale(scale, scale);
+                frame.paintAll(g);
+                g.dispose();
                 return img;
             });
             Files.createDirectories(SHOTS);
-            String name = "results-" + (i + 1) + "-" + onEdt(() -> view.tabs().getTitleAt(index)).toLowerCase()
+            double scale = onEdt(() -> frame.getGraphicsConfiguration().getDefaultTransform().getScaleX());
+            String name = "results-" + (scale > 1 ? Math.round(100 * scale) + "pc-" : "") + (i + 1) + "-" + onEdt(() -> view.tabs().getTitleAt(index)).toLowerCase()
                     .replaceAll("[^a-z]+", "-") + ".png";
             ImageIO.write(image, "png", SHOTS.resolve(name).toFile());
             assertTrue(Files.size(SHOTS.resolve(name)) > 10_000, name);
