@@ -71,8 +71,11 @@ public final class ResultsView {
                 nyquist.show(shown, modeTable.getSelectedRow());
             }
         });
-        JSplitPane modes = new JSplitPane(JSplitPane.VERTICAL_SPLIT, new JScrollPane(modeTable), nyquist.component());
-        modes.setResizeWeight(0.3);
+        JScrollPane tableScroll = new JScrollPane(modeTable);
+        tableScroll.setPreferredSize(new java.awt.Dimension(700, 400));
+        nyquist.component().setPreferredSize(new java.awt.Dimension(520, 400));
+        JSplitPane modes = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, tableScroll, nyquist.component());
+        modes.setResizeWeight(0.55);
         tabs.setName("resultTabs");
         tabs.addTab("FRF and fit", frf.component());
         tabs.addTab("Pole choice", poles.component());
