@@ -28,12 +28,14 @@ final class PropertiesPanel {
         }
     };
     private final JTextArea reasons = new JTextArea();
-    private final JPanel component = new JPanel(new MigLayout("fill, wrap 1", "[grow, fill]", "[][][grow 30, fill][][grow 70, fill]"));
+    private final JPanel component = new JPanel(new MigLayout("fill, wrap 1", "[grow, fill]", "[][][fill][][grow, fill]"));
 
     PropertiesPanel() {
         JTable table = new JTable(verdict);
         table.setName("verdictTable");
         table.setFillsViewportHeight(true);
+        // Room for about eight limits; the reasons below take the rest of the height.
+        table.setPreferredScrollableViewportSize(new java.awt.Dimension(600, 8 * table.getRowHeight()));
         table.getColumnModel().getColumn(4).setCellRenderer(new DefaultTableCellRenderer() {
             private static final long serialVersionUID = 1L;
 
