@@ -13,6 +13,7 @@ import org.tautline.analysis.modal.FittedMode;
 import org.tautline.analysis.modal.ModalEstimate;
 import org.tautline.analysis.modal.ModalEstimator;
 import org.tautline.analysis.modal.ModalSynthesis;
+import org.tautline.analysis.modal.ModeSelection;
 import org.tautline.analysis.modal.Mode;
 import org.tautline.analysis.specimen.AssignedMode;
 import org.tautline.analysis.specimen.HarmonicAssigner;
@@ -78,6 +79,34 @@ public final class Qualification {
                                               long wallStartNs) {
         Frf receptance = frf.toQuantity(FrfQuantity.RECEPTANCE);
         ModalEstimate modal = estimator.estimate(receptance);
+        return fromModal(specimen, receptance, sweep, modal, specification, wallStartNs);
+    }
+
+    /**
+     * Fits a result again with a pole choice edited by hand, and redoes everything downstream.
+     *
+     * <p>The poles go through the same LSFD and joint refinement as an automatic fit
+     * ({@link ModalEstimator#refit}); harmonic numbering, tension, participation and verdict follow
+     * as in {@link #analyse(Specimen, Frf, Optional, ModalEstimator, Optional, long)}. A level check
+     * of the earlier result is kept and its shift judged again.
+     *
+     * @param previous the result whose FRF and stabilisation chart are refitted
+     * @param selection the poles to fit
+     * @param specification the limits to judge against, if any
+     * @param wallStartNs {@link System#nanoTime()} when the refit started
+     * @return the new result
+     */
+    public static QualificationResult refit(QualificationResult previous, ModeSelection selection,
+                                            Optional<Specification> specification, long wallStartNs) {
+        ModalEstimate modal = ModalEstimator.defaults().refit(previous.receptance(), selection, previous.modal().chart());
+        QualificationResult fresh = fromModal(previous.specimen(), previous.receptance(), previous.sweep(), modal,
+                specification, wallStartNs);
+        return previous.linearity().map(l -> withLinearity(fresh, l, specification)).orElse(fresh);
+    }
+
+    private static QualificationResult fromModal(Specimen specimen, Frf receptance, Optional<SweepRecord> sweep,
+                                                 ModalEstimate modal, Optional<Specification> specification,
+                                                 long wallStartNs) {
         List<FittedMode> fitted = modal.modes();
         HarmonicAssignment harmonics = new HarmonicAssigner().withSplitTolerance(DOUBLET_SPLIT)
                 .assign(specimen, fitted, Double.NaN, modal.bandLowHz(), modal.bandHighHz());
