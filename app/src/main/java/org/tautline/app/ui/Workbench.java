@@ -54,6 +54,10 @@ public final class Workbench implements WorkbenchParts {
         rig = new RigScreen(drivers, runs::connect, runs::disconnect);
         files = new FileController(this, runs, recent);
         exports = new ExportController(this);
+        results.onRefit(result -> {
+            files.resultShown(result);
+            exports.resultShown(result);
+        });
     }
 
     /** Opens the window on the event thread, with the look the desktop prefers. */

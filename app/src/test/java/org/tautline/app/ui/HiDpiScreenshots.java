@@ -10,7 +10,8 @@ import java.nio.file.Path;
 
 import javax.swing.AbstractButton;
 import javax.swing.JDialog;
-import javax.swing.JTextArea;
+import javax.swing.JLabel;
+import javax.swing.JTabbedPane;
 import javax.swing.SwingUtilities;
 
 import org.tautline.app.ui.project.RecentFiles;
@@ -51,9 +52,12 @@ public final class HiDpiScreenshots {
             SwingUtilities.invokeAndWait(ok::doClick);
             Thread.sleep(1500);
             shoot(w.frame(), "hidpi-4-run.png");
-            JTextArea results = find(w.frame(), JTextArea.class, "results");
-            waitFor("the verdict", 60, () -> results.getText().contains("Verdict"));
-            shoot(w.frame(), "hidpi-5-results.png");
+            JLabel outcome = find(w.frame(), JLabel.class, "outcome");
+            waitFor("the verdict", 60, () -> outcome.getText().startsWith("Verdict"));
+            JTabbedPane resultTabs = find(w.frame(), JTabbedPane.class, "resultTabs");
+            shoot(w.frame(), "hidpi-5-results-1.png");
+            SwingUtilities.invokeAndWait(() -> resultTabs.setSelectedIndex(resultTabs.getTabCount() - 1));
+            shoot(w.frame(), "hidpi-5-results-verdict.png");
         } finally {
             SwingUtilities.invokeAndWait(() -> w.frame().dispose());
         }

@@ -14,6 +14,7 @@ import javax.swing.JDialog;
 import javax.swing.JFrame;
 import javax.swing.JLabel;
 import javax.swing.JProgressBar;
+import javax.swing.JTabbedPane;
 import javax.swing.JTextArea;
 import javax.swing.JTextField;
 import javax.swing.SwingUtilities;
@@ -94,12 +95,19 @@ class WorkbenchTest {
                 waitFor("the last step", 60, () -> progress.getValue() == progress.getMaximum());
                 assertNoStall(watchdog);
             }
-            JTextArea results = find(frame, JTextArea.class, "results");
-            waitFor("the verdict", 60, () -> results.getText().contains("Verdict"));
-            String text = onEdt(results::getText);
-            assertTrue(text.contains("Verdict: PASS"), text);
+            JLabel outcome = find(frame, JLabel.class, "outcome");
+            waitFor("the verdict", 60, () -> outcome.getText().startsWith("Verdict"));
+            String text = onEdt(outcome::getText);
+            assertEquals("Verdict: PASS", text);
             assertEquals(3, (int) onEdt(() -> w.tabs().getSelectedIndex()));
-            shoot(frame, "6-results.png");
+            JTabbedPane resultTabs = find(frame, JTabbedPane.class, "resultTabs");
+            int resultTabCount = onEdt(resultTabs::getTabCount);
+            for (int i = 0; i < resultTabCount; i++) {
+                int tab = i;
+                SwingUtilities.invokeAndWait(() -> resultTabs.setSelectedIndex(tab));
+                shoot(frame, "6-results-" + (i + 1) + ".png");
+            }
+            SwingUtilities.invokeAndWait(() -> resultTabs.setSelectedIndex(0));
             SwingUtilities.invokeAndWait(() -> Themes.apply(Themes.Choice.DARK));
             shoot(frame, "7-results-dark.png");
             SwingUtilities.invokeAndWait(() -> w.tabs().setSelectedIndex(2));

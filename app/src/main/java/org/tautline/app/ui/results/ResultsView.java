@@ -77,6 +77,7 @@ public final class ResultsView {
         JSplitPane modes = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, tableScroll, nyquist.component());
         modes.setResizeWeight(0.55);
         tabs.setName("resultTabs");
+        tabs.setName("resultTabs");
         tabs.addTab("FRF and fit", frf.component());
         tabs.addTab("Pole choice", poles.component());
         tabs.addTab("Modes", modes);
