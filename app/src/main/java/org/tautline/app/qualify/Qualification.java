@@ -168,14 +168,17 @@ public final class Qualification {
      *
      * <p>The two polarisations of a doublet see slightly different end stiffness (that is what splits
      * them), so they do not lie on one stiff-string line; the polarisation the drive excites most
-     * stands for the harmonic, as it does for f1.
+     * stands for the harmonic, as it does for f1. A harmonic whose frequency has no standard error (the
+     * joint refinement could not give one, as after a hand-edited pole choice that leaves one member of a
+     * doublet to stand for both) cannot be weighted and is left out of the fit.
      */
     private static List<NumberedFrequency> dominantSeries(List<QualifiedMode> modes) {
         List<NumberedFrequency> series = new ArrayList<>();
         int top = modes.stream().mapToInt(QualifiedMode::harmonic).max().orElse(0);
         for (int n = 1; n <= top; n++) {
-            dominant(modes, n).ifPresent(d -> series.add(new NumberedFrequency(d.harmonic(), d.mode().frequencyHz(),
-                    d.fitted().frequencyStdHz())));
+            dominant(modes, n).filter(d -> d.fitted().frequencyStdHz() > 0 && Double.isFinite(d.fitted().frequencyStdHz()))
+                    .ifPresent(d -> series.add(new NumberedFrequency(d.harmonic(), d.mode().frequencyHz(),
+                            d.fitted().frequencyStdHz())));
         }
         return series;
     }
