@@ -3,24 +3,34 @@ package org.tautline.app.ui;
 import java.awt.Color;
 
 /**
- * Plot colours chosen to stay distinct under the common colour-vision deficiencies.
+ * Plot colours of the workbench, chosen to stay distinct under the common colour-vision deficiencies.
  *
  * <p>Values from M. Okabe and K. Ito, "Color Universal Design: how to make figures and
  * presentations that are friendly to colorblind people", 2008 (a general-purpose palette).
  */
-final class Palette {
-    /** Measured data. */
-    static final Color MEASURED = new Color(0x00, 0x72, 0xB2);
-    /** The fitted model. */
-    static final Color FIT = new Color(0xD5, 0x5E, 0x00);
-    /** Markers for identified modes. */
-    static final Color MODE_MARK = new Color(0x00, 0x9E, 0x73);
+public final class Palette {
+    /** Measured data: blue. */
+    public static final Color MEASURED = new Color(0x00, 0x72, 0xB2);
+    /** The fitted model: vermilion. */
+    public static final Color FIT = new Color(0xD5, 0x5E, 0x00);
+    /** A second measured quantity (coherence, quality) and markers for identified modes: bluish green. */
+    public static final Color SECOND = new Color(0x00, 0x9E, 0x73);
+    /** Poles that agree in frequency only: orange. */
+    public static final Color FREQUENCY_ONLY = new Color(0xE6, 0x9F, 0x00);
+    /** Poles that agree in frequency and damping or better: blue. */
+    public static final Color AGREEING = MEASURED;
+    /** Poles that agree with nothing in the order below: grey. */
+    public static final Color LONE = new Color(0x99, 0x99, 0x99);
+    /** Chosen poles: black. */
+    public static final Color CHOSEN = Color.BLACK;
     /** Pass. */
-    static final Color PASS = new Color(0x00, 0x9E, 0x73);
+    public static final Color PASS = SECOND;
     /** Fail. */
-    static final Color FAIL = new Color(0xD5, 0x5E, 0x00);
+    public static final Color FAIL = FIT;
     /** Not determinable. */
-    static final Color UNDETERMINED = new Color(0xE6, 0x9F, 0x00);
+    public static final Color UNDETERMINED = FREQUENCY_ONLY;
+    /** Grid lines. */
+    public static final Color GRID = new Color(0xDD, 0xDD, 0xDD);
 
     private Palette() {
     }

@@ -51,7 +51,7 @@ class HiDpiScreenshotTest {
             assertTrue(finished, "the 200 % run did not finish in 120 s; see target/hidpi-screenshots.log");
             assertEquals(0, run.exitValue(), "the 200 % run failed; see target/hidpi-screenshots.log:\n"
                     + Files.readString(Path.of("target/hidpi-screenshots.log")));
-            BufferedImage results = ImageIO.read(SwingDriver.SHOTS.resolve("hidpi-5-results.png").toFile());
+            BufferedImage results = ImageIO.read(SwingDriver.SHOTS.resolve("hidpi-5-results-1.png").toFile());
             assertEquals(2560, results.getWidth(), "a 1280-wide window at 200 % is 2560 pixels wide");
         } finally {
             server.destroy();

@@ -21,14 +21,14 @@ import javax.swing.SwingUtilities;
 import org.junit.jupiter.api.Assumptions;
 
 /** Finding components, waiting on the event thread and saving screenshots, for the workbench tests. */
-final class SwingDriver {
-    static final Path SHOTS = Path.of("target", "screenshots");
+public final class SwingDriver {
+    public static final Path SHOTS = Path.of("target", "screenshots");
 
     private SwingDriver() {
     }
 
     /** Skips locally without a display; fails under CI, which must provide one. */
-    static void needDisplay() {
+    public static void needDisplay() {
         if (GraphicsEnvironment.isHeadless()) {
             if (System.getenv("CI") != null) {
                 throw new AssertionError("CI must provide a display (Xvfb) for the workbench tests: DISPLAY="
@@ -38,7 +38,7 @@ final class SwingDriver {
         }
     }
 
-    static <T> T onEdt(Callable<T> call) throws Exception {
+    public static <T> T onEdt(Callable<T> call) throws Exception {
         AtomicReference<T> result = new AtomicReference<>();
         AtomicReference<Exception> error = new AtomicReference<>();
         SwingUtilities.invokeAndWait(() -> {
@@ -54,7 +54,7 @@ final class SwingDriver {
         return result.get();
     }
 
-    static void waitFor(String what, double seconds, Callable<Boolean> condition) throws Exception {
+    public static void waitFor(String what, double seconds, Callable<Boolean> condition) throws Exception {
         long deadline = System.nanoTime() + (long) (seconds * 1e9);
         while (System.nanoTime() < deadline) {
             if (onEdt(condition)) {
@@ -65,7 +65,7 @@ final class SwingDriver {
         throw new AssertionError("timed out after " + seconds + " s waiting for " + what);
     }
 
-    static JDialog waitForDialog(String title) throws Exception {
+    public static JDialog waitForDialog(String title) throws Exception {
         AtomicReference<JDialog> found = new AtomicReference<>();
         waitFor("the dialog '" + title + "'", 10, () -> {
             for (Window w : Window.getWindows()) {
@@ -79,7 +79,7 @@ final class SwingDriver {
         return found.get();
     }
 
-    static <T extends Component> T find(Container root, Class<T> type, String name) {
+    public static <T extends Component> T find(Container root, Class<T> type, String name) {
         T found = findOrNull(root, type, c -> name.equals(c.getName()));
         if (found == null) {
             throw new AssertionError("no " + type.getSimpleName() + " named '" + name + "' in the window");
@@ -87,7 +87,7 @@ final class SwingDriver {
         return found;
     }
 
-    static AbstractButton findButtonByText(Container root, String text) {
+    public static AbstractButton findButtonByText(Container root, String text) {
         AbstractButton b = findOrNull(root, AbstractButton.class, c -> text.equals(((AbstractButton) c).getText()));
         if (b == null) {
             throw new AssertionError("no button '" + text + "'");
@@ -112,7 +112,7 @@ final class SwingDriver {
     }
 
     /** Paints a window into an image at the screen's scale and saves it as PNG. */
-    static void shoot(Window window, String name) throws Exception {
+    public static void shoot(Window window, String name) throws Exception {
         BufferedImage image = onEdt(() -> {
             double scale = window.getGraphicsConfiguration().getDefaultTransform().getScaleX();
             int w = (int) Math.round(window.getWidth() * scale);
@@ -132,7 +132,7 @@ final class SwingDriver {
         }
     }
 
-    static boolean poll(BooleanSupplier s, long timeoutMs) throws InterruptedException {
+    public static boolean poll(BooleanSupplier s, long timeoutMs) throws InterruptedException {
         long deadline = System.nanoTime() + TimeUnit.MILLISECONDS.toNanos(timeoutMs);
         while (System.nanoTime() < deadline) {
             if (s.getAsBoolean()) {

@@ -1,5 +1,6 @@
 package org.tautline.app.ui.results;
 
+import org.tautline.app.ui.Palette;
 import java.awt.Color;
 import java.awt.Font;
 
@@ -25,8 +26,8 @@ final class Charts {
 
     static void style(XYPlot plot) {
         plot.setBackgroundPaint(Color.WHITE);
-        plot.setDomainGridlinePaint(ResultColours.GRID);
-        plot.setRangeGridlinePaint(ResultColours.GRID);
+        plot.setDomainGridlinePaint(Palette.GRID);
+        plot.setRangeGridlinePaint(Palette.GRID);
     }
 
     static ChartPanel panel(String title, Plot plot, boolean legend) {

@@ -1,5 +1,6 @@
 package org.tautline.app.ui.results;
 
+import org.tautline.app.ui.Palette;
 import java.awt.BasicStroke;
 import java.awt.geom.Ellipse2D;
 
@@ -41,13 +42,13 @@ final class FrfPanel {
     private static XYPlot subplot(XYSeries measured, XYSeries fit, ValueAxis axis, boolean inLegend) {
         XYSeriesCollection data = new XYSeriesCollection(measured);
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(false, true);
-        renderer.setSeriesPaint(0, fit == null ? ResultColours.SECOND : ResultColours.MEASURED);
+        renderer.setSeriesPaint(0, fit == null ? Palette.SECOND : Palette.MEASURED);
         renderer.setSeriesShape(0, new Ellipse2D.Double(-1.5, -1.5, 3, 3));
         if (fit != null) {
             data.addSeries(fit);
             renderer.setSeriesLinesVisible(1, true);
             renderer.setSeriesShapesVisible(1, false);
-            renderer.setSeriesPaint(1, ResultColours.FIT);
+            renderer.setSeriesPaint(1, Palette.FIT);
             renderer.setSeriesStroke(1, new BasicStroke(1.5f));
         }
         XYPlot plot = new XYPlot(data, null, axis, renderer);

@@ -1,5 +1,6 @@
 package org.tautline.app.ui.results;
 
+import org.tautline.app.ui.Palette;
 import java.awt.BasicStroke;
 import java.awt.geom.Ellipse2D;
 import java.util.List;
@@ -32,12 +33,12 @@ final class NyquistPanel {
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer();
         renderer.setSeriesLinesVisible(0, false);
         renderer.setSeriesShape(0, new Ellipse2D.Double(-2.5, -2.5, 5, 5));
-        renderer.setSeriesPaint(0, ResultColours.MEASURED);
+        renderer.setSeriesPaint(0, Palette.MEASURED);
         renderer.setSeriesShapesVisible(1, false);
-        renderer.setSeriesPaint(1, ResultColours.FIT);
+        renderer.setSeriesPaint(1, Palette.FIT);
         renderer.setSeriesStroke(1, new BasicStroke(1.5f));
         renderer.setSeriesShapesVisible(2, false);
-        renderer.setSeriesPaint(2, ResultColours.SECOND);
+        renderer.setSeriesPaint(2, Palette.SECOND);
         renderer.setSeriesStroke(2, new BasicStroke(1.2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
                 new float[] {6f, 4f}, 0f));
         NumberAxis re = new NumberAxis("Re Y (m/(N s))");

@@ -1,5 +1,6 @@
 package org.tautline.app.ui.results;
 
+import org.tautline.app.ui.Palette;
 import java.awt.BasicStroke;
 import java.awt.geom.Ellipse2D;
 
@@ -28,12 +29,12 @@ final class ParticipationPanel {
         renderer.setDrawXError(false);
         renderer.setSeriesLinesVisible(0, false);
         renderer.setSeriesShape(0, new Ellipse2D.Double(-4, -4, 8, 8));
-        renderer.setSeriesPaint(0, ResultColours.MEASURED);
+        renderer.setSeriesPaint(0, Palette.MEASURED);
         renderer.setSeriesLinesVisible(1, true);
         renderer.setSeriesShape(1, PoleSymbols.square());
-        renderer.setSeriesPaint(1, ResultColours.FIT);
+        renderer.setSeriesPaint(1, Palette.FIT);
         renderer.setSeriesStroke(1, new BasicStroke(1.2f));
-        renderer.setErrorPaint(ResultColours.MEASURED);
+        renderer.setErrorPaint(Palette.MEASURED);
         NumberAxis harmonic = new NumberAxis("Harmonic n");
         harmonic.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
         XYPlot plot = new XYPlot(data, harmonic, new NumberAxis("Modal constant (1/kg)"), renderer);

@@ -1,5 +1,6 @@
 package org.tautline.app.ui.results;
 
+import org.tautline.app.ui.Palette;
 import java.awt.Component;
 import java.util.List;
 
@@ -82,9 +83,9 @@ final class PropertiesPanel {
 
     private static java.awt.Color colourOf(String outcome) {
         return switch (outcome) {
-            case "PASS" -> ResultColours.PASS.darker();
-            case "FAIL" -> ResultColours.FAIL;
-            default -> ResultColours.UNDETERMINED.darker();
+            case "PASS" -> Palette.PASS.darker();
+            case "FAIL" -> Palette.FAIL;
+            default -> Palette.UNDETERMINED.darker();
         };
     }
 }

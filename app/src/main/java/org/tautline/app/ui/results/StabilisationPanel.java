@@ -1,5 +1,6 @@
 package org.tautline.app.ui.results;
 
+import org.tautline.app.ui.Palette;
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.util.ArrayList;
@@ -40,21 +41,21 @@ final class StabilisationPanel {
             polesBySeries.add(new ArrayList<>());
         }
         symbols.setSeriesShape(0, PoleSymbols.ring());
-        symbols.setSeriesPaint(0, ResultColours.CHOSEN);
+        symbols.setSeriesPaint(0, Palette.CHOSEN);
         symbols.setSeriesShapesFilled(0, false);
         symbols.setSeriesOutlineStroke(0, new BasicStroke(2f));
         symbols.setSeriesStroke(0, new BasicStroke(2f));
         symbols.setSeriesShape(1, PoleSymbols.square());
-        symbols.setSeriesPaint(1, ResultColours.AGREEING);
+        symbols.setSeriesPaint(1, Palette.AGREEING);
         symbols.setSeriesShapesFilled(1, true);
         symbols.setSeriesShape(2, PoleSymbols.square());
-        symbols.setSeriesPaint(2, ResultColours.AGREEING);
+        symbols.setSeriesPaint(2, Palette.AGREEING);
         symbols.setSeriesShapesFilled(2, false);
         symbols.setSeriesShape(3, PoleSymbols.frequencyOnly());
-        symbols.setSeriesPaint(3, ResultColours.FREQUENCY_ONLY);
+        symbols.setSeriesPaint(3, Palette.FREQUENCY_ONLY);
         symbols.setSeriesShapesFilled(3, false);
         symbols.setSeriesShape(4, PoleSymbols.lone());
-        symbols.setSeriesPaint(4, ResultColours.LONE);
+        symbols.setSeriesPaint(4, Palette.LONE);
         symbols.setSeriesShapesFilled(4, false);
         symbols.setUseOutlinePaint(false);
         symbols.setDrawOutlines(true);

@@ -23,6 +23,7 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.tautline.analysis.modal.Pole;
 import org.tautline.app.qualify.DemoRun;
+import org.tautline.app.ui.SwingDriver;
 import org.tautline.app.qualify.QualificationResult;
 import org.tautline.driver.sweep.SweepListener;
 
@@ -155,18 +156,6 @@ class ResultsViewTest {
     }
 
     private static <T> T onEdt(java.util.concurrent.Callable<T> call) throws Exception {
-        AtomicReference<T> result = new AtomicReference<>();
-        AtomicReference<Exception> error = new AtomicReference<>();
-        SwingUtilities.invokeAndWait(() -> {
-            try {
-                result.set(call.call());
-            } catch (Exception e) {
-                error.set(e);
-            }
-        });
-        if (error.get() != null) {
-            throw error.get();
-        }
-        return result.get();
+        return SwingDriver.onEdt(call);
     }
 }
