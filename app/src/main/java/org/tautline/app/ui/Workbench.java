@@ -44,6 +44,7 @@ public final class Workbench implements WorkbenchParts {
     private final RigScreen rig;
     private final RunScreen run = new RunScreen();
     private final ResultsScreen results = new ResultsScreen();
+    private final LotScreen lots = new LotScreen();
     private final RunController runs;
     private final FileController files;
     private final ExportController exports;
@@ -57,6 +58,7 @@ public final class Workbench implements WorkbenchParts {
         results.onRefit(result -> {
             files.resultShown(result);
             exports.resultShown(result);
+            lots.resultShown(result);
         });
     }
 
@@ -132,6 +134,7 @@ public final class Workbench implements WorkbenchParts {
         results.showResults(result);
         files.resultShown(result);
         exports.resultShown(result);
+        lots.resultShown(result);
         tabs.setSelectedIndex(3);
     }
 
@@ -140,7 +143,8 @@ public final class Workbench implements WorkbenchParts {
         tabs.addTab("2 Rig", rig.component());
         tabs.addTab("3 Run", run.component());
         tabs.addTab("4 Results", results.component());
-        int[] keys = {KeyEvent.VK_1, KeyEvent.VK_2, KeyEvent.VK_3, KeyEvent.VK_4};
+        tabs.addTab("5 Lot", lots.component());
+        int[] keys = {KeyEvent.VK_1, KeyEvent.VK_2, KeyEvent.VK_3, KeyEvent.VK_4, KeyEvent.VK_5};
         for (int i = 0; i < keys.length; i++) {
             tabs.setMnemonicAt(i, keys[i]);
         }

@@ -113,6 +113,22 @@ class WorkbenchTest {
             SwingUtilities.invokeAndWait(() -> w.tabs().setSelectedIndex(2));
             shoot(frame, "8-run-dark.png");
             SwingUtilities.invokeAndWait(() -> Themes.apply(Themes.Choice.LIGHT));
+            // The lot screen: add the result to a new register file, then read the lot's statistics back.
+            SwingUtilities.invokeAndWait(() -> w.tabs().setSelectedIndex(4));
+            JTextField register = find(frame, JTextField.class, "lotRegister");
+            Path registerFile = home.resolve("lots.sqlite");
+            SwingUtilities.invokeAndWait(() -> register.setText(registerFile.toString()));
+            AbstractButton addToLot = find(frame, AbstractButton.class, "addToLot");
+            SwingUtilities.invokeAndWait(addToLot::doClick);
+            JLabel lotMessage = find(frame, JLabel.class, "lotMessage");
+            waitFor("the lot's statistics", 30, () -> lotMessage.getText().startsWith("tensionN:"));
+            javax.swing.JTable lotFigures = find(frame, javax.swing.JTable.class, "lotFigures");
+            assertTrue(onEdt(lotFigures::getRowCount) >= 5, "one row per figure of the qualification");
+            assertEquals("tensionN", onEdt(() -> lotFigures.getValueAt(lotFigures.getSelectedRow(), 0)));
+            assertEquals("1", onEdt(() -> lotFigures.getValueAt(lotFigures.getSelectedRow(), 2)));
+            SwingUtilities.invokeAndWait(addToLot::doClick);
+            waitFor("the second qualification", 30, () -> "2".equals(lotFigures.getValueAt(0, 2)));
+            shoot(frame, "10-lot.png");
         } finally {
             SwingUtilities.invokeAndWait(() -> {
                 w.files().edited();

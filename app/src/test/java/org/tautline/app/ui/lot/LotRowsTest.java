@@ -1,0 +1,38 @@
+package org.tautline.app.ui.lot;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import java.util.List;
+
+import org.junit.jupiter.api.Test;
+import org.tautline.app.lot.FigureStatistics;
+
+/** The lot table's rows and the control-chart summary, without a display. */
+class LotRowsTest {
+
+    @Test
+    void rowsCarryTheStatisticsAndShowMissingLimitsAsDashes() {
+        // Cpk = min(USL - mean, mean - LSL) / (3 s) (Montgomery, Introduction to Statistical Quality Control,
+        // sec. 8.3, from memory): values 1, 2, 3 have mean 2 and s 1, so with limits 0 .. 5 Cpk = 2 / 3 = 0.67.
+        FigureStatistics withLimits = FigureStatistics.of("tensionN", "N", List.of(1.0, 2.0, 3.0), 0.0, 5.0);
+        FigureStatistics noLimits = FigureStatistics.of("f1Hz", "Hz", List.of(10.0), Double.NaN, Double.NaN);
+        List<String[]> rows = LotRows.of(List.of(withLimits, noLimits));
+        assertArrayEquals(new String[] {"tensionN", "N", "3", "2.00000", "1.00000", "1.00000", "3.00000", "0.00000",
+                "5.00000", "0.67"}, rows.get(0));
+        assertArrayEquals(new String[] {"f1Hz", "Hz", "1", "10.0000", "-", "10.0000", "10.0000", "-", "-", "-"},
+                rows.get(1));
+    }
+
+    @Test
+    void chartSummaryNamesThePointsOutsideTheControlLimits() {
+        // Individuals chart limits mean +/- 3 MR-bar / 1.128 (Montgomery sec. 6.4, from memory): for 10, 10, 10, 10, 14
+        // the moving ranges are 0, 0, 0, 4, MR-bar = 1, mean 10.8, limits 10.8 +/- 2.6596 = 8.1404 .. 13.4596.
+        FigureStatistics f = FigureStatistics.of("f1Hz", "Hz", List.of(10.0, 10.0, 10.0, 10.0, 14.0), Double.NaN,
+                Double.NaN);
+        assertEquals("f1Hz: centre 10.8000, control limits 8.14043 .. 13.4596 (mean +/- 3 MR-bar/1.128); 1 point(s)"
+                + " outside: number 5", LotRows.chartSummary(f));
+        assertEquals("f1Hz: one qualification so far; control limits need two or more",
+                LotRows.chartSummary(FigureStatistics.of("f1Hz", "Hz", List.of(10.0), Double.NaN, Double.NaN)));
+    }
+}
