@@ -1,11 +1,10 @@
 package org.tautline.driver.journal;
 
-import java.util.List;
-
 import org.tautline.driver.RigException;
 import org.tautline.driver.spi.Acquisition;
-import org.tautline.driver.spi.ChannelInfo;
 import org.tautline.driver.spi.Exciter;
+import org.tautline.driver.spi.ForwardingAcquisition;
+import org.tautline.driver.spi.ForwardingExciter;
 import org.tautline.driver.spi.Rig;
 import org.tautline.driver.spi.SampleBlock;
 
@@ -33,50 +32,18 @@ final class FaultyRig implements Rig {
 
     @Override
     public Exciter exciter() {
-        Exciter e = inner.exciter();
-        return new Exciter() {
+        return new ForwardingExciter(inner.exciter()) {
             @Override
             public void setSine(double frequencyHz, double amplitudeV) {
                 sinesSet++;
-                e.setSine(frequencyHz, amplitudeV);
-            }
-
-            @Override
-            public void rampTo(double amplitudeV, double durationS) {
-                e.rampTo(amplitudeV, durationS);
-            }
-
-            @Override
-            public void setOutputEnabled(boolean enabled) {
-                e.setOutputEnabled(enabled);
-            }
-
-            @Override
-            public boolean isOutputEnabled() {
-                return e.isOutputEnabled();
-            }
-
-            @Override
-            public double maxAmplitudeV() {
-                return e.maxAmplitudeV();
+                super.setSine(frequencyHz, amplitudeV);
             }
         };
     }
 
     @Override
     public Acquisition acquisition() {
-        Acquisition a = inner.acquisition();
-        return new Acquisition() {
-            @Override
-            public double sampleRateHz() {
-                return a.sampleRateHz();
-            }
-
-            @Override
-            public List<ChannelInfo> channels() {
-                return a.channels();
-            }
-
+        return new ForwardingAcquisition(inner.acquisition()) {
             @Override
             public SampleBlock read(int sampleCount) {
                 // The runner sets the drive once at zero before the ramp, then once per step.
@@ -84,12 +51,7 @@ final class FaultyRig implements Rig {
                     fired = true;
                     throw new RigException(FAULT);
                 }
-                return a.read(sampleCount);
-            }
-
-            @Override
-            public long nextSampleIndex() {
-                return a.nextSampleIndex();
+                return super.read(sampleCount);
             }
         };
     }

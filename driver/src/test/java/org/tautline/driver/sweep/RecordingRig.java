@@ -4,8 +4,9 @@ import java.util.ArrayList;
 import java.util.List;
 
 import org.tautline.driver.spi.Acquisition;
-import org.tautline.driver.spi.ChannelInfo;
 import org.tautline.driver.spi.Exciter;
+import org.tautline.driver.spi.ForwardingAcquisition;
+import org.tautline.driver.spi.ForwardingExciter;
 import org.tautline.driver.spi.Rig;
 import org.tautline.driver.spi.SampleBlock;
 
@@ -38,66 +39,39 @@ final class RecordingRig implements Rig {
 
     @Override
     public Exciter exciter() {
-        Exciter e = inner.exciter();
-        return new Exciter() {
+        return new ForwardingExciter(inner.exciter()) {
             @Override
             public void setSine(double f, double a) {
                 frequencyHz = f;
                 commands.add(new Command("sine", a, 0, inner.acquisition().nextSampleIndex()));
-                e.setSine(f, a);
+                super.setSine(f, a);
             }
 
             @Override
             public void rampTo(double a, double d) {
                 commands.add(new Command("ramp", a, d, inner.acquisition().nextSampleIndex()));
-                e.rampTo(a, d);
+                super.rampTo(a, d);
             }
 
             @Override
             public void setOutputEnabled(boolean on) {
                 commands.add(new Command(on ? "on" : "off", 0, 0, inner.acquisition().nextSampleIndex()));
-                e.setOutputEnabled(on);
-            }
-
-            @Override
-            public boolean isOutputEnabled() {
-                return e.isOutputEnabled();
-            }
-
-            @Override
-            public double maxAmplitudeV() {
-                return e.maxAmplitudeV();
+                super.setOutputEnabled(on);
             }
         };
     }
 
     @Override
     public Acquisition acquisition() {
-        Acquisition a = inner.acquisition();
-        return new Acquisition() {
-            @Override
-            public double sampleRateHz() {
-                return a.sampleRateHz();
-            }
-
-            @Override
-            public List<ChannelInfo> channels() {
-                return a.channels();
-            }
-
+        return new ForwardingAcquisition(inner.acquisition()) {
             @Override
             public SampleBlock read(int n) {
                 if (blockPeaks.size() >= readsBeforeLinkFault) {
                     throw new org.tautline.driver.RigException("link lost: the rig stopped answering");
                 }
-                SampleBlock b = a.read(n);
+                SampleBlock b = super.read(n);
                 blockPeaks.add(new double[] {peak(b.samples()[0]), peak(b.samples()[1]), frequencyHz});
                 return b;
-            }
-
-            @Override
-            public long nextSampleIndex() {
-                return a.nextSampleIndex();
             }
         };
     }
