@@ -73,7 +73,7 @@ final class FrfPanel {
             lineAxis.setRange(0, 1.05);
         } else if (h.quality().isPresent()) {
             figure = h.quality().get();
-            lineAxis.setLabel("Sine-fit residual");
+            lineAxis.setLabel("Sine-fit residual / RMS");
             lineAxis.setAutoRange(true);
         } else {
             figure = new double[0];
