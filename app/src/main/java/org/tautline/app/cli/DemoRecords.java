@@ -42,10 +42,7 @@ final class DemoRecords {
                 sensors.responseSensor().name().toLowerCase(Locale.ROOT), fmt(sensors.responseFullScale()),
                 fmt(sensors.responseNoiseDensity())));
         m.put("calibration", "simulated transducers read in SI units directly: sensitivity 1, no calibration certificate applies");
-        m.put("sweep plan", String.format(Locale.ROOT, "stepped sine %s to %s Hz in %d log-spaced steps, settle %s cycles"
-                        + " (at least %s s), integrate %d cycles, drive %s V peak, ramp %s s, harmonics to order %d",
-                fmt(plan.startHz()), fmt(plan.stopHz()), plan.stepCount(), fmt(plan.settleCycles()), fmt(plan.minSettleS()),
-                plan.integrationCycles(), fmt(plan.driveAmplitudeV()), fmt(plan.rampS()), plan.harmonicOrder()));
+        m.put("sweep plan", plan.describe());
         return m;
     }
 

@@ -19,7 +19,6 @@ import org.tautline.app.report.QualificationReport;
 import org.tautline.app.report.ReportInfo;
 import org.tautline.app.report.RunDirectory;
 import org.tautline.app.report.RunExport;
-import org.tautline.driver.sweep.SteppedSinePlan;
 import org.tautline.driver.sweep.SweepRecord;
 
 /**
@@ -87,16 +86,9 @@ final class ExportController {
     private static Map<String, String> metadata(QualificationResult result) {
         Map<String, String> lines = new LinkedHashMap<>();
         lines.put("source", "Tautline workbench");
-        result.sweep().ifPresentOrElse(sweep -> lines.put("sweep plan", plan(sweep.plan())),
+        result.sweep().ifPresentOrElse(sweep -> lines.put("sweep plan", sweep.plan().describe()),
                 () -> lines.put("sweep plan", "none: the FRF was imported from a file"));
         return lines;
-    }
-
-    private static String plan(SteppedSinePlan p) {
-        return String.format(java.util.Locale.ROOT, "stepped sine %.1f to %.1f Hz in %d log-spaced steps, settle %.1f cycles"
-                        + " (at least %.3f s), integrate %d cycles, drive %.3f V peak, ramp %.2f s, harmonics to order %d",
-                p.startHz(), p.stopHz(), p.stepCount(), p.settleCycles(), p.minSettleS(), p.integrationCycles(),
-                p.driveAmplitudeV(), p.rampS(), p.harmonicOrder());
     }
 
     private static Optional<String> recordedSweep(QualificationResult result) {

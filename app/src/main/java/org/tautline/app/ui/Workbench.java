@@ -55,11 +55,7 @@ public final class Workbench implements WorkbenchParts {
         rig = new RigScreen(drivers, runs::connect, runs::disconnect);
         files = new FileController(this, runs, recent);
         exports = new ExportController(this);
-        results.onRefit(result -> {
-            files.resultShown(result);
-            exports.resultShown(result);
-            lots.resultShown(result);
-        });
+        results.onRefit(this::resultChanged);
     }
 
     /** Opens the window on the event thread, with the look the desktop prefers. */
@@ -130,11 +126,16 @@ public final class Workbench implements WorkbenchParts {
         files.edited();
     }
 
-    private void showResult(QualificationResult result) {
-        results.showResults(result);
+    /** The project, the exports and the lot screen follow the result on show, whether new or refitted. */
+    private void resultChanged(QualificationResult result) {
         files.resultShown(result);
         exports.resultShown(result);
         lots.resultShown(result);
+    }
+
+    private void showResult(QualificationResult result) {
+        results.showResults(result);
+        resultChanged(result);
         tabs.setSelectedIndex(3);
     }
 

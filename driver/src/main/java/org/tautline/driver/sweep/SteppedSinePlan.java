@@ -119,4 +119,21 @@ public record SteppedSinePlan(double startHz, double stopHz, int stepCount, doub
         return (Math.ceil(settleTimeS(frequencyHz) * sampleRateHz) + integrationSamples(frequencyHz, sampleRateHz))
                 / sampleRateHz;
     }
+
+    /**
+     * The plan in one line, for reports and file headers.
+     *
+     * @return for example "stepped sine 180.0 to 1500 Hz in 1061 log-spaced steps, settle 250.0 cycles (at least
+     *         0.02000 s), integrate 100 cycles, drive 1.000 V peak, ramp 0.2000 s, harmonics to order 3"
+     */
+    public String describe() {
+        return String.format(java.util.Locale.ROOT, "stepped sine %s to %s Hz in %d log-spaced steps, settle %s cycles"
+                        + " (at least %s s), integrate %d cycles, drive %s V peak, ramp %s s, harmonics to order %d",
+                fourDigits(startHz), fourDigits(stopHz), stepCount, fourDigits(settleCycles), fourDigits(minSettleS),
+                integrationCycles, fourDigits(driveAmplitudeV), fourDigits(rampS), harmonicOrder);
+    }
+
+    private static String fourDigits(double v) {
+        return String.format(java.util.Locale.ROOT, "%.4g", v);
+    }
 }
