@@ -35,4 +35,19 @@ public interface Exciter {
 
     /** @return the largest peak drive voltage the exciter accepts, V */
     double maxAmplitudeV();
+
+    /**
+     * Switches the output off at once, from any thread, even while another thread is inside a command or a read.
+     *
+     * <p>This is the emergency path of a stop (an interrupt signal, a closing window): it must not wait for
+     * a lock that a read or a command holds, must return within about 100 ms, and must never throw. Where the
+     * rig cannot do that it returns false, and the sweep switches the output off at its next check (before
+     * the next block). After a true return {@link #isOutputEnabled()} answers false and the output stays off
+     * until {@link #setOutputEnabled(boolean) setOutputEnabled(true)}.
+     *
+     * @return true when the off command was issued, false when this rig has no such path
+     */
+    default boolean switchOffNow() {
+        return false;
+    }
 }

@@ -36,4 +36,9 @@ public class ForwardingExciter implements Exciter {
     public double maxAmplitudeV() {
         return inner.maxAmplitudeV();
     }
+
+    @Override
+    public boolean switchOffNow() {
+        return inner.switchOffNow();
+    }
 }
