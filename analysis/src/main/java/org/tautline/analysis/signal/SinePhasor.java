@@ -33,6 +33,28 @@ public record SinePhasor(double frequencyHz, double amplitude, double phaseRad, 
         return harmonicAmplitudes.clone();
     }
 
+    /**
+     * Value equality, the harmonic amplitudes compared element by element (a record compares arrays by identity).
+     *
+     * @param other another object
+     * @return true when every field is equal
+     */
+    @Override
+    public boolean equals(Object other) {
+        return other instanceof SinePhasor p && Double.compare(frequencyHz, p.frequencyHz) == 0
+                && Double.compare(amplitude, p.amplitude) == 0 && Double.compare(phaseRad, p.phaseRad) == 0
+                && Double.compare(offset, p.offset) == 0 && java.util.Arrays.equals(harmonicAmplitudes, p.harmonicAmplitudes)
+                && Double.compare(residualRms, p.residualRms) == 0 && Double.compare(amplitudeStd, p.amplitudeStd) == 0
+                && Double.compare(phaseStdRad, p.phaseStdRad) == 0 && sampleCount == p.sampleCount;
+    }
+
+    /** @return a hash consistent with {@link #equals(Object)} */
+    @Override
+    public int hashCode() {
+        return java.util.Objects.hash(frequencyHz, amplitude, phaseRad, offset, java.util.Arrays.hashCode(harmonicAmplitudes),
+                residualRms, amplitudeStd, phaseStdRad, sampleCount);
+    }
+
     /** @return the complex phasor amplitude e^{j phase} (so y = Re(phasor e^{j w t}) + offset) */
     public Complex phasor() {
         return new Complex(amplitude * Math.cos(phaseRad), amplitude * Math.sin(phaseRad));

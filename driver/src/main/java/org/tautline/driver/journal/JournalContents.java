@@ -9,7 +9,7 @@ import java.util.List;
 import java.util.Optional;
 
 import org.tautline.driver.RigException;
-import org.tautline.driver.sweep.SweepRecord;
+import org.tautline.driver.sweep.CompletedStep;
 import org.tautline.driver.sweep.SweepStatus;
 
 /**
@@ -37,16 +37,19 @@ public record JournalContents(Path file, JournalHeader header, List<JournalStep>
         return sessions.get(sessions.size() - 1).status();
     }
 
-    /** @return true when every planned step is in the journal */
-    public boolean allStepsDone() {
-        return steps.size() == header.plan().stepCount();
+    /** @return true when the last session ran the plan to its end: there is nothing left to resume */
+    public boolean finished() {
+        return lastStatus().filter(s -> s == SweepStatus.COMPLETED).isPresent();
     }
 
-    /** @return the sweep so far: plan, response quantity and the completed steps with their rig times */
-    public SweepRecord record() {
-        List<org.tautline.driver.sweep.SweepPoint> points = steps.stream().map(JournalStep::point).toList();
-        double rigTimeS = points.isEmpty() ? 0.0 : points.get(points.size() - 1).rigTimeS();
-        return new SweepRecord(header.plan(), header.channels().get(1).quantity(), points, rigTimeS, allStepsDone());
+    /** @return the completed steps, in order, as the sweep engine continues from them */
+    public List<CompletedStep> completedSteps() {
+        return steps.stream().map(JournalStep::step).toList();
+    }
+
+    /** @return what channel 1 measured: displacement, velocity or acceleration */
+    public String responseQuantity() {
+        return header.channels().get(1).quantity();
     }
 
     /** @return the raw-samples side file, beside the journal; empty when the journal keeps no samples */

@@ -7,7 +7,7 @@ import java.util.List;
 import java.util.Map;
 
 import org.tautline.driver.spi.ChannelInfo;
-import org.tautline.driver.sweep.SteppedSinePlan;
+import org.tautline.driver.sweep.SweepPlan;
 
 /**
  * The first record of a journal: what was run, on which rig, and when.
@@ -23,10 +23,10 @@ import org.tautline.driver.sweep.SteppedSinePlan;
  * @param samplesFile file name of the raw-samples side file beside the journal, or empty when samples are not kept
  */
 public record JournalHeader(int formatVersion, Instant startedAt, String driver, Map<String, String> options,
-                            String identity, double sampleRateHz, List<ChannelInfo> channels, SteppedSinePlan plan,
+                            String identity, double sampleRateHz, List<ChannelInfo> channels, SweepPlan plan,
                             String samplesFile) {
     /** The format version this code writes and reads. */
-    public static final int FORMAT_VERSION = 1;
+    public static final int FORMAT_VERSION = 2;
     /** The value of the header's {@code format} field. */
     static final String FORMAT_NAME = "tautline-journal";
 
@@ -56,15 +56,7 @@ public record JournalHeader(int formatVersion, Instant startedAt, String driver,
             f.put("channel." + i + ".quantity", channels.get(i).quantity());
             f.put("channel." + i + ".unit", channels.get(i).unit());
         }
-        f.put("plan.startHz", Double.toString(plan.startHz()));
-        f.put("plan.stopHz", Double.toString(plan.stopHz()));
-        f.put("plan.stepCount", Integer.toString(plan.stepCount()));
-        f.put("plan.settleCycles", Double.toString(plan.settleCycles()));
-        f.put("plan.minSettleS", Double.toString(plan.minSettleS()));
-        f.put("plan.integrationCycles", Integer.toString(plan.integrationCycles()));
-        f.put("plan.driveAmplitudeV", Double.toString(plan.driveAmplitudeV()));
-        f.put("plan.rampS", Double.toString(plan.rampS()));
-        f.put("plan.harmonicOrder", Integer.toString(plan.harmonicOrder()));
+        PlanFields.put(f, plan);
         f.put("samples", samplesFile.isEmpty() ? "none" : samplesFile);
         return new JournalLine("HEADER", f);
     }
@@ -76,7 +68,8 @@ public record JournalHeader(int formatVersion, Instant startedAt, String driver,
         int version = (int) line.whole("version");
         if (version != FORMAT_VERSION) {
             throw new IllegalArgumentException("format version " + version + " is not the version this Tautline reads ("
-                    + FORMAT_VERSION + ")");
+                    + FORMAT_VERSION + ")" + (version < FORMAT_VERSION ? "; the journal was written by an earlier"
+                    + " Tautline: finish it with that version, or run the sweep again" : "; update Tautline"));
         }
         Map<String, String> options = new LinkedHashMap<>();
         line.fields().forEach((k, v) -> {
@@ -90,10 +83,7 @@ public record JournalHeader(int formatVersion, Instant startedAt, String driver,
             channels.add(new ChannelInfo(line.text("channel." + i + ".name"), line.text("channel." + i + ".quantity"),
                     line.text("channel." + i + ".unit")));
         }
-        SteppedSinePlan plan = new SteppedSinePlan(line.number("plan.startHz"), line.number("plan.stopHz"),
-                (int) line.whole("plan.stepCount"), line.number("plan.settleCycles"), line.number("plan.minSettleS"),
-                (int) line.whole("plan.integrationCycles"), line.number("plan.driveAmplitudeV"), line.number("plan.rampS"),
-                (int) line.whole("plan.harmonicOrder"));
+        SweepPlan plan = PlanFields.read(line);
         String samples = line.text("samples");
         return new JournalHeader(version, Instant.parse(line.text("startedAt")), line.text("driver"), options,
                 line.text("identity"), line.number("sampleRateHz"), channels, plan, samples.equals("none") ? "" : samples);

@@ -46,7 +46,8 @@ public final class JournalReader {
         int pos = 0;
         while (pos < bytes.length) {
             int nl = indexOf(bytes, (byte) '\n', pos);
-            JournalLine line = nl < 0 ? null : JournalLine.decode(Arrays.copyOfRange(bytes, pos, nl));
+            int end = nl > pos && bytes[nl - 1] == '\r' ? nl - 1 : nl;
+            JournalLine line = nl < 0 ? null : JournalLine.decode(Arrays.copyOfRange(bytes, pos, end));
             if (line == null) {
                 warning = String.format(Locale.ROOT, "journal %s: read up to byte %d of %d; the record starting there is %s,"
                         + " so it and anything after it are ignored (%d completed step(s) kept)", file, pos, bytes.length,
@@ -67,8 +68,12 @@ public final class JournalReader {
             pos = nl + 1;
         }
         if (header == null) {
-            throw new RigException("journal " + file + " has no complete header record (" + bytes.length
-                    + " bytes): the sweep stopped before it started; run it again");
+            boolean damaged = bytes.length > 0 && indexOf(bytes, (byte) '\n', 0) >= 0;
+            throw new RigException("journal " + file + (damaged
+                    ? ": the header record (line 1) is damaged: its CRC does not match its contents, so the journal"
+                    + " cannot be trusted; keep the file for inspection and run the sweep again into a new folder"
+                    : " has no complete header record (" + bytes.length + " bytes): the sweep stopped before it"
+                    + " started; run it again"));
         }
         if (open != null) {
             sessions.add(open.build(steps.size(), Optional.empty(), ""));
@@ -84,14 +89,13 @@ public final class JournalReader {
                     throw new IllegalArgumentException("a STEP after the END of its session and before any RESUMED");
                 }
                 JournalStep step = JournalStep.fromLine(line);
-                double[] planned = header.plan().frequenciesHz();
-                if (step.index() != steps.size() || step.index() >= planned.length) {
-                    throw new IllegalArgumentException("STEP index " + step.index() + " where step " + steps.size()
-                            + " of the " + planned.length + " planned was expected");
+                if (step.index() != steps.size()) {
+                    throw new IllegalArgumentException("STEP index " + step.index() + " where index " + steps.size()
+                            + " was expected (steps are recorded in order)");
                 }
-                if (step.frequencyHz() != planned[step.index()]) {
-                    throw new IllegalArgumentException("STEP " + step.index() + " at " + step.frequencyHz()
-                            + " Hz where the plan puts it at " + planned[step.index()] + " Hz");
+                if (step.step().pass() >= header.plan().passCount()) {
+                    throw new IllegalArgumentException("STEP " + step.index() + " belongs to pass " + step.step().pass()
+                            + " but the plan has " + header.plan().passCount() + " pass(es)");
                 }
                 steps.add(step);
                 return open;
@@ -100,7 +104,7 @@ public final class JournalReader {
                 if (open == null) {
                     throw new IllegalArgumentException("a second END with no RESUMED between");
                 }
-                SweepStatus status = SweepStatus.valueOf(line.text("status").toUpperCase(Locale.ROOT));
+                SweepStatus status = PlanFields.choice(line, "status", SweepStatus.class);
                 sessions.add(open.build(steps.size(), Optional.of(status), line.text("reason")));
                 return null;
             }

@@ -1,30 +1,54 @@
 package org.tautline.driver.journal;
 
 import java.util.LinkedHashMap;
+import java.util.Locale;
 import java.util.Map;
+import java.util.Optional;
 
 import org.tautline.analysis.signal.SinePhasor;
+import org.tautline.driver.sweep.CompletedStep;
+import org.tautline.driver.sweep.SettleState;
+import org.tautline.driver.sweep.StepPhase;
 import org.tautline.driver.sweep.SweepPoint;
 
 /**
- * A completed step as the journal holds it: the commanded drive and both channels' full sine fits.
+ * A completed step as the journal holds it: the step and where its raw samples are, when they are kept.
  *
- * @param index the step's place in the plan, 0 first
- * @param frequencyHz commanded frequency, Hz
- * @param driveAmplitudeV commanded peak drive, V
- * @param force the force channel's fit
- * @param response the response channel's fit
- * @param rigTimeS rig time since the sweep started when the step's integration ended, s
+ * @param step the step: its place, pass, phase, drive and both channels' full sine fits
  * @param samplesOffset byte offset of the step's samples in the side file, or -1 when not kept
  * @param sampleCount samples per channel kept in the side file (0 when not kept)
  * @param samplesCrc CRC-32 of the step's side-file bytes as eight hex digits (empty when not kept)
  */
-public record JournalStep(int index, double frequencyHz, double driveAmplitudeV, SinePhasor force, SinePhasor response,
-                          double rigTimeS, long samplesOffset, int sampleCount, String samplesCrc) {
+public record JournalStep(CompletedStep step, long samplesOffset, int sampleCount, String samplesCrc) {
+
+    /** @return the step's place in the sweep, 0 first */
+    public int index() {
+        return step.index();
+    }
+
+    /** @return the step's frequency, Hz */
+    public double frequencyHz() {
+        return step.point().frequencyHz();
+    }
+
+    /** @return the commanded peak drive, V */
+    public double driveAmplitudeV() {
+        return step.point().driveAmplitudeV();
+    }
+
+    /** @return the force channel's fit */
+    public SinePhasor force() {
+        return step.force();
+    }
+
+    /** @return the response channel's fit */
+    public SinePhasor response() {
+        return step.response();
+    }
 
     /** @return the sweep point, computed from the fits exactly as the sweep computed it */
     public SweepPoint point() {
-        return SweepPoint.of(frequencyHz, driveAmplitudeV, force, response, rigTimeS);
+        return step.point();
     }
 
     /** @return true when the step's samples are in the side file */
@@ -39,13 +63,18 @@ public record JournalStep(int index, double frequencyHz, double driveAmplitudeV,
 
     JournalLine toLine() {
         Map<String, String> f = new LinkedHashMap<>();
-        f.put("index", Integer.toString(index));
-        f.put("frequencyHz", Double.toString(frequencyHz));
-        f.put("driveAmplitudeV", Double.toString(driveAmplitudeV));
-        f.put("rigTimeS", Double.toString(rigTimeS));
-        put(f, "force", force);
-        put(f, "response", response);
-        SweepPoint p = point();
+        SweepPoint p = step.point();
+        f.put("index", Integer.toString(step.index()));
+        f.put("pass", Integer.toString(step.pass()));
+        f.put("phase", step.phase().name().toLowerCase(Locale.ROOT));
+        f.put("frequencyHz", Double.toString(p.frequencyHz()));
+        f.put("driveAmplitudeV", Double.toString(p.driveAmplitudeV()));
+        f.put("rigTimeS", Double.toString(p.rigTimeS()));
+        f.put("settle", step.settleState().name().toLowerCase(Locale.ROOT));
+        f.put("settleS", Double.toString(step.settleS()));
+        step.warning().ifPresent(w -> f.put("warning", w));
+        put(f, "force", step.force());
+        put(f, "response", step.response());
         f.put("frf.re", Double.toString(p.response().getReal()));
         f.put("frf.im", Double.toString(p.response().getImaginary()));
         f.put("relativeResidual", Double.toString(p.relativeResidual()));
@@ -76,9 +105,15 @@ public record JournalStep(int index, double frequencyHz, double driveAmplitudeV,
 
     static JournalStep fromLine(JournalLine line) {
         boolean kept = line.fields().containsKey("samples.offset");
-        return new JournalStep((int) line.whole("index"), line.number("frequencyHz"), line.number("driveAmplitudeV"),
-                phasor(line, "force"), phasor(line, "response"), line.number("rigTimeS"),
-                kept ? line.whole("samples.offset") : -1, kept ? (int) line.whole("samples.count") : 0,
+        double f = line.number("frequencyHz");
+        SinePhasor force = phasor(line, "force");
+        SinePhasor response = phasor(line, "response");
+        SweepPoint point = SweepPoint.of(f, line.number("driveAmplitudeV"), force, response, line.number("rigTimeS"));
+        CompletedStep step = new CompletedStep((int) line.whole("index"), (int) line.whole("pass"),
+                PlanFields.choice(line, "phase", StepPhase.class), point, force, response,
+                PlanFields.choice(line, "settle", SettleState.class), line.number("settleS"),
+                Optional.ofNullable(line.fields().get("warning")));
+        return new JournalStep(step, kept ? line.whole("samples.offset") : -1, kept ? (int) line.whole("samples.count") : 0,
                 kept ? line.text("samples.crc") : "");
     }
 
@@ -91,7 +126,12 @@ public record JournalStep(int index, double frequencyHz, double driveAmplitudeV,
             String[] parts = h.split(",");
             harmonics = new double[parts.length];
             for (int i = 0; i < parts.length; i++) {
-                harmonics[i] = Double.parseDouble(parts[i]);
+                try {
+                    harmonics[i] = Double.parseDouble(parts[i]);
+                } catch (NumberFormatException e) {
+                    throw new IllegalArgumentException("STEP field '" + prefix + ".harmonics' holds '" + parts[i]
+                            + "', not a number", e);
+                }
             }
         }
         return new SinePhasor(line.number(prefix + ".frequencyHz"), line.number(prefix + ".amplitude"),

@@ -110,7 +110,7 @@ public final class JournalWriter implements SweepJournal, AutoCloseable {
     }
 
     @Override
-    public void stepCompleted(CompletedStep step) {
+    public void stepCompleted(CompletedStep step, SampleBlock block) {
         if (step.index() != stepsWritten) {
             throw new RigException("journal " + file + ": step " + (step.index() + 1) + " arrived where step "
                     + (stepsWritten + 1) + " was expected");
@@ -119,7 +119,7 @@ public final class JournalWriter implements SweepJournal, AutoCloseable {
         int count = 0;
         String crc = "";
         if (samples != null) {
-            byte[] raw = rawBytes(step.samples());
+            byte[] raw = rawBytes(block);
             try {
                 offset = samples.size();
                 writeFully(samples, ByteBuffer.wrap(raw), offset);
@@ -128,11 +128,10 @@ public final class JournalWriter implements SweepJournal, AutoCloseable {
                 throw new RigException("samples file " + samplesFile + ": could not record the samples of step "
                         + (step.index() + 1) + ": " + e, e);
             }
-            count = step.samples().length();
+            count = block.length();
             crc = JournalLine.crcHex(raw);
         }
-        JournalStep record = new JournalStep(step.index(), step.point().frequencyHz(), step.point().driveAmplitudeV(),
-                step.force(), step.response(), step.point().rigTimeS(), offset, count, crc);
+        JournalStep record = new JournalStep(step, offset, count, crc);
         append(record.toLine(), "step " + (step.index() + 1));
         stepsWritten++;
     }

@@ -2,8 +2,8 @@ package org.tautline.driver.journal;
 
 import java.nio.file.Path;
 import java.time.Clock;
+import java.util.LinkedHashMap;
 import java.util.Map;
-import java.util.function.BooleanSupplier;
 import java.util.function.Consumer;
 
 import org.tautline.driver.RigException;
@@ -11,18 +11,20 @@ import org.tautline.driver.spi.Rig;
 import org.tautline.driver.spi.RigDriver;
 import org.tautline.driver.spi.RigDrivers;
 import org.tautline.driver.spi.RigOptionValues;
-import org.tautline.driver.sweep.SteppedSinePlan;
-import org.tautline.driver.sweep.SteppedSineRunner;
-import org.tautline.driver.sweep.SweepListener;
-import org.tautline.driver.sweep.SweepRecord;
+import org.tautline.driver.sweep.SweepControl;
+import org.tautline.driver.sweep.SweepEngine;
+import org.tautline.driver.sweep.SweepEventListener;
+import org.tautline.driver.sweep.SweepPlan;
+import org.tautline.driver.sweep.SweepResult;
 
 /**
- * Runs a sweep on a rig chosen by driver name with a journal, and resumes one from its journal.
+ * Runs a sweep on a rig chosen by driver name with a journal, and continues one from its journal.
  *
- * <p>A resume reads the journal (up to its last valid record), opens the rig again with the driver
- * and options the header recorded, refuses a rig whose identity, sample rate or channels differ from
- * the recorded ones, cuts the journal after its last valid record, appends a RESUMED record and runs
- * only the steps not yet done. The result is the whole sweep, the recorded steps first.
+ * <p>A resume reads the journal (up to its last valid record), opens the rig again with the driver and
+ * options the header recorded (an option such as the port may be given anew: a serial adapter that came
+ * back under another name), refuses a rig whose identity, sample rate or channels differ from the recorded
+ * ones, cuts the journal after its last valid record, appends a RESUMED record and lets the
+ * {@link SweepEngine} continue from the recorded steps. The result is the whole sweep.
  */
 public final class JournaledSweep {
     /** File name of the samples side file, beside the journal, when samples are kept. */
@@ -32,7 +34,7 @@ public final class JournaledSweep {
     }
 
     /**
-     * Opens the rig, writes the journal header and runs the plan.
+     * Opens the rig, checks the plan against it, writes the journal header and runs the plan.
      *
      * @param drivers where to find the driver
      * @param driverName the driver, for example {@code sim}
@@ -40,25 +42,25 @@ public final class JournaledSweep {
      * @param plan the sweep
      * @param journalFile the journal to create; it must not exist
      * @param keepSamples true to keep every step's integration samples in {@value #SAMPLES_FILE} beside the journal
-     * @param listener progress after every step
-     * @param cancelRequested polled during the sweep
+     * @param listener progress events
+     * @param control stop requests
      * @param clock the clock for the journal's times
-     * @return the sweep record
-     * @throws RigException for a bad driver or option, a rig that cannot run the plan, or a fault
+     * @return the sweep; its status says how it ended, the output is off
+     * @throws RigException for a bad driver or option, or a rig that cannot run the plan (nothing was excited)
      */
-    public static SweepRecord run(RigDrivers drivers, String driverName, Map<String, String> options, SteppedSinePlan plan,
-                                  Path journalFile, boolean keepSamples, SweepListener listener,
-                                  BooleanSupplier cancelRequested, Clock clock) {
+    public static SweepResult run(RigDrivers drivers, String driverName, Map<String, String> options, SweepPlan plan,
+                                  Path journalFile, boolean keepSamples, SweepEventListener listener,
+                                  SweepControl control, Clock clock) {
         RigDriver driver = drivers.find(driverName);
         Map<String, String> complete = RigOptionValues.of(driver, options).asMap();
         try (Rig rig = driver.open(complete)) {
-            SteppedSineRunner runner = new SteppedSineRunner(rig);
-            runner.check(plan);
+            SweepEngine engine = new SweepEngine(rig);
+            engine.check(plan);
             JournalHeader header = new JournalHeader(JournalHeader.FORMAT_VERSION, clock.instant(), driverName, complete,
                     rig.identity(), rig.acquisition().sampleRateHz(), rig.acquisition().channels(), plan,
                     keepSamples ? SAMPLES_FILE : "");
             try (JournalWriter writer = JournalWriter.create(journalFile, header, clock)) {
-                return runner.run(plan, listener, cancelRequested, writer);
+                return engine.run(plan, listener, control, writer);
             }
         }
     }
@@ -68,30 +70,42 @@ public final class JournaledSweep {
      *
      * @param drivers where to find the recorded driver
      * @param journalFile the journal
-     * @param notices receives what the caller should tell the user: where reading stopped, a finished journal
-     * @param listener progress after every step, the recorded steps counted as done
-     * @param cancelRequested polled during the sweep
+     * @param optionChanges driver options to use instead of the recorded ones (for example a new {@code port})
+     * @param notices receives what the caller should tell the user: where reading stopped, what is resumed
+     * @param listener progress events, the recorded steps reported first
+     * @param control stop requests
      * @param clock the clock for the journal's times
-     * @return the whole sweep; for a journal that already holds every step, its record, with no rig opened
-     * @throws RigException for an unreadable journal, a missing driver, a different rig, or a fault
+     * @return the whole sweep
+     * @throws RigException for an unreadable or finished journal, a missing driver, a different rig, or a plan the
+     *         rig cannot run
      */
-    public static SweepRecord resume(RigDrivers drivers, Path journalFile, Consumer<String> notices,
-                                     SweepListener listener, BooleanSupplier cancelRequested, Clock clock) {
+    public static SweepResult resume(RigDrivers drivers, Path journalFile, Map<String, String> optionChanges,
+                                     Consumer<String> notices, SweepEventListener listener, SweepControl control,
+                                     Clock clock) {
         JournalContents contents = JournalReader.read(journalFile);
         contents.warning().ifPresent(notices);
         JournalHeader header = contents.header();
-        if (contents.allStepsDone()) {
-            notices.accept("journal " + journalFile + " already holds all " + header.plan().stepCount()
-                    + " steps; nothing to resume");
-            return contents.record();
+        if (contents.finished()) {
+            throw new RigException("journal " + journalFile + " records a sweep that ran to its end ("
+                    + contents.steps().size() + " steps); there is nothing to resume");
         }
         RigDriver driver = drivers.find(header.driver());
-        try (Rig rig = driver.open(header.options())) {
+        Map<String, String> options = new LinkedHashMap<>(header.options());
+        for (Map.Entry<String, String> change : optionChanges.entrySet()) {
+            if (!options.containsKey(change.getKey())) {
+                throw new RigException("the " + header.driver() + " rig of journal " + journalFile + " has no option '"
+                        + change.getKey() + "'; its options are " + String.join(", ", options.keySet()));
+            }
+            options.put(change.getKey(), change.getValue());
+        }
+        try (Rig rig = driver.open(RigOptionValues.of(driver, options).asMap())) {
             checkSameRig(journalFile, header, rig);
-            notices.accept("resuming " + journalFile + " at step " + (contents.steps().size() + 1) + " of "
-                    + header.plan().stepCount() + " on " + rig.identity());
+            SweepEngine engine = new SweepEngine(rig);
+            engine.check(header.plan());
+            notices.accept("resuming " + journalFile + " after " + contents.steps().size() + " completed step(s) on "
+                    + rig.identity());
             try (JournalWriter writer = JournalWriter.resume(contents, rig.identity(), clock)) {
-                return new SteppedSineRunner(rig).continueFrom(contents.record(), listener, cancelRequested, writer);
+                return engine.resume(header.plan(), contents.completedSteps(), listener, control, writer);
             }
         }
     }

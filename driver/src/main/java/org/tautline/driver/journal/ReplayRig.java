@@ -21,7 +21,7 @@ import org.tautline.driver.spi.SampleBlock;
  * distortion included. Otherwise the steady-state sines of the recorded force and response phasors
  * are synthesised with the same time origin (no offset, harmonics or noise). Samples scale with the
  * commanded amplitude over the recorded one; with the output off the channels read zero. The drive
- * may not exceed the recorded level, and a frequency that was not recorded is refused. The clock
+ * may not exceed the highest recorded level, and a frequency that was not recorded is refused. The clock
  * advances by the samples read and by ramps, as on the simulated rig.
  */
 public final class ReplayRig implements Rig {
@@ -29,6 +29,7 @@ public final class ReplayRig implements Rig {
     private final Map<Double, JournalStep> byFrequency = new HashMap<>();
     private final Map<Integer, double[][]> raw = new HashMap<>();
     private final double sampleRateHz;
+    private final double recordedDriveV;
     private final ReplayExciter exciter = new ReplayExciter();
     private final ReplayAcquisition acquisition = new ReplayAcquisition();
     private JournalStep current;
@@ -45,6 +46,7 @@ public final class ReplayRig implements Rig {
         this.journal = journal;
         this.sampleRateHz = journal.header().sampleRateHz();
         journal.steps().forEach(s -> byFrequency.put(s.frequencyHz(), s));
+        this.recordedDriveV = journal.steps().stream().mapToDouble(JournalStep::driveAmplitudeV).max().orElse(0.0);
     }
 
     @Override
@@ -96,7 +98,7 @@ public final class ReplayRig implements Rig {
                 checkAmplitude(newAmplitudeV);
                 current = step;
                 amplitudeV = newAmplitudeV;
-                cursor = -(long) Math.ceil(journal.header().plan().settleTimeS(frequencyHz) * sampleRateHz);
+                cursor = -(long) Math.ceil(journal.header().plan().settle().dwellS(frequencyHz) * sampleRateHz);
             }
         }
 
@@ -134,7 +136,7 @@ public final class ReplayRig implements Rig {
 
         @Override
         public double maxAmplitudeV() {
-            return journal.header().plan().driveAmplitudeV();
+            return recordedDriveV;
         }
     }
 

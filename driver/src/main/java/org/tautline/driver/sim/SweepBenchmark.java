@@ -7,19 +7,21 @@ import org.tautline.analysis.AnalysisException;
 import org.tautline.analysis.frf.Frf;
 import org.tautline.analysis.modal.FittedMode;
 import org.tautline.analysis.modal.ModalEstimator;
-import org.tautline.driver.sweep.AdaptivePass;
-import org.tautline.driver.sweep.AdaptiveSweepPlan;
-import org.tautline.driver.sweep.AdaptiveSweepResult;
-import org.tautline.driver.sweep.AdaptiveSweepRunner;
+import java.util.Optional;
+
 import org.tautline.driver.sweep.LevelMode;
+import org.tautline.driver.sweep.Refinement;
 import org.tautline.driver.sweep.SafetyLimits;
-import org.tautline.driver.sweep.SteppedSinePlan;
-import org.tautline.driver.sweep.SteppedSineRunner;
+import org.tautline.driver.sweep.SettleRule;
+import org.tautline.driver.sweep.SweepControl;
 import org.tautline.driver.sweep.SweepDirection;
+import org.tautline.driver.sweep.SweepEngine;
+import org.tautline.driver.sweep.SweepEventListener;
 import org.tautline.driver.sweep.SweepJournal;
-import org.tautline.driver.sweep.SweepListener;
+import org.tautline.driver.sweep.SweepPass;
+import org.tautline.driver.sweep.SweepPlan;
 import org.tautline.driver.sweep.SweepPoint;
-import org.tautline.driver.sweep.SweepRecord;
+import org.tautline.driver.sweep.SweepResult;
 
 /**
  * Rig time of the adaptive sweep against a uniform log-spaced stepped sine tuned to the same accuracy, and a lower bound.
@@ -30,7 +32,7 @@ import org.tautline.driver.sweep.SweepRecord;
  * largest true error over the seven modes, from {@link SimulationTruth}: |f - f_true|/f_true and
  * |zeta - zeta_true|/zeta_true. The goal is the accuracy the adaptive sweep reached (its plan asks for
  * standard errors of 2e-5 in f and 2 % in zeta). The uniform sweep is the plain
- * {@link SteppedSineRunner} with a fixed settle time; its step count and settle time are searched
+ * {@link SweepEngine} on a uniform plan with a fixed settle time; its step count and settle time are searched
  * (settle 0.5, 1.5 and 4.6 tau of the slowest mode; steps 300, 600, ... doubling; a pair skipped when its
  * planned time cannot beat the best so far or exceeds {@value #SEARCH_CAP} times the adaptive rig time)
  * and the cheapest pair whose local modal fits meet the goal is reported. The lower bound
@@ -98,21 +100,24 @@ public final class SweepBenchmark {
     }
 
     /** @return the adaptive plan the benchmark runs */
-    public static AdaptiveSweepPlan plan() {
-        return new AdaptiveSweepPlan(LOW_HZ, HIGH_HZ, LevelMode.DRIVE, List.of(DRIVE_V), FREQUENCY_STD_TARGET,
-                DAMPING_STD_TARGET, new SafetyLimits(5.0, 4.0, 9e-4, 9e-4), SweepDirection.UP, 1800.0, 30, 0.001, 0.01,
-                INTEGRATION_CYCLES, 0.0, 0.01, DRIVE_V, 20.0, 0.1, 1);
+    public static SweepPlan plan() {
+        return new SweepPlan(LOW_HZ, HIGH_HZ, 30, SettleRule.detected(0.01), INTEGRATION_CYCLES, LevelMode.DRIVE,
+                List.of(DRIVE_V), LIMITS, SweepDirection.UP,
+                Optional.of(new Refinement(FREQUENCY_STD_TARGET, DAMPING_STD_TARGET, 1800.0)), 0.001, 0.01, DRIVE_V,
+                20.0, 0.1, 1);
     }
+
+    private static final SafetyLimits LIMITS = new SafetyLimits(5.0, 4.0, 9e-4, 9e-4);
 
     /** @return the figures */
     public static Figures run() {
         long t0 = System.nanoTime();
         SimulationConfig config = specimen();
         List<TrueMode> truth = modesInBand(SimulationTruth.of(config));
-        AdaptiveSweepPlan plan = plan();
-        AdaptiveSweepResult adaptive = new AdaptiveSweepRunner(new SimulatedRig(config)).run(plan,
-                e -> { }, () -> false, SweepJournal.NONE);
-        AdaptivePass pass = adaptive.passes().get(0);
+        SweepPlan plan = plan();
+        SweepResult adaptive = new SweepEngine(new SimulatedRig(config)).run(plan, SweepEventListener.NONE,
+                SweepControl.none(), SweepJournal.NONE);
+        SweepPass pass = adaptive.passes().get(0);
         double[] adaptiveError = errors(pass.modes(), truth);
         double fGoal = adaptiveError[0];
         double zGoal = adaptiveError[1];
@@ -134,15 +139,15 @@ public final class SweepBenchmark {
         for (double settleTaus : SETTLE_TAUS) {
             double settleS = settleTaus * slowestTauS;
             for (int steps : STEP_LADDER) {
-                SteppedSinePlan uniform = new SteppedSinePlan(LOW_HZ, HIGH_HZ, steps, 0.0, settleS, INTEGRATION_CYCLES,
-                        DRIVE_V, plan.rampS(), 1);
-                double planned = uniform.plannedRigTimeS(config.sampleRateHz());
+                SweepPlan uniform = SweepPlan.uniform(LOW_HZ, HIGH_HZ, steps, 0.0, settleS, INTEGRATION_CYCLES,
+                        DRIVE_V, plan.rampS(), 1, LIMITS);
+                double planned = uniform.expectedRigTimeS(config.sampleRateHz());
                 if (planned >= bestTime || planned > capS) {
                     break;
                 }
                 trials++;
-                SweepRecord record = new SteppedSineRunner(new SimulatedRig(config)).run(uniform, SweepListener.NONE,
-                        () -> false);
+                SweepResult record = new SweepEngine(new SimulatedRig(config)).run(uniform, SweepEventListener.NONE,
+                        SweepControl.none(), SweepJournal.NONE);
                 double[] e = errors(localFits(record.toFrf(), truth), truth);
                 if (e[0] <= fGoal && e[1] <= zGoal) {
                     bestTime = record.rigTimeS();

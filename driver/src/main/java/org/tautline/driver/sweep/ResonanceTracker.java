@@ -57,6 +57,11 @@ final class ResonanceTracker {
         return lastFitProblem;
     }
 
+    /** @return true once the peak has been placed and refinement has begun */
+    boolean located() {
+        return located;
+    }
+
     boolean exhausted() {
         return updates >= MAX_UPDATES;
     }

@@ -65,6 +65,12 @@ public record SafetyLimits(double driveV, double forceN, double responseAmplitud
         return Optional.empty();
     }
 
+    /** @return the limits in words, for reports and file headers */
+    public String describe() {
+        return String.format(Locale.ROOT, "drive %.4g V, force %.4g N, response %.4g, displacement %.4g m", driveV, forceN,
+                responseAmplitude, displacementM);
+    }
+
     private static String reason(String what, double value, double limit, String unit, double f) {
         return String.format(Locale.ROOT, "safety limit reached: %s peak %.4g %s at %.2f Hz is at or above the limit %.4g %s",
                 what, value, unit, f, limit, unit).replace("  ", " ");

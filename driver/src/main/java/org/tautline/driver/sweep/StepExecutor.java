@@ -2,8 +2,8 @@ package org.tautline.driver.sweep;
 
 import java.util.Locale;
 import java.util.Optional;
-import java.util.function.BooleanSupplier;
 import java.util.function.Consumer;
+import java.util.function.DoubleSupplier;
 
 import org.hipparchus.complex.Complex;
 import org.tautline.analysis.signal.SineFit;
@@ -14,32 +14,32 @@ import org.tautline.driver.spi.Rig;
 import org.tautline.driver.spi.SampleBlock;
 
 /**
- * Runs one step of an adaptive sweep: change frequency, settle (detected or a fixed dwell), hold the level, fit.
+ * Measures one step: change frequency, settle (detected or a fixed dwell), hold the level, fit.
  *
- * <p>Every block read, settling or integrating, is checked against the safety limits before anything
- * else is done with it, and a cancel is seen before every block; either stops the step with a
- * {@link SweepStop} that the runner turns into a ramp-down. Drive changes are ramps at the plan's
- * rate, never steps.
+ * <p>Every block read, settling or integrating, is checked against the plan's safety limits before anything
+ * else is done with it, and a stop request is seen before every block; either ends the step with a
+ * {@link SweepStop} that the engine turns into a ramp-down. Drive changes are ramps at the plan's rate, never
+ * steps.
  */
 final class StepExecutor {
     /** Most drive corrections per step before the level control gives up and warns. */
     static final int MAX_LEVEL_CORRECTIONS = 6;
+    /** Samples per block while dwelling a fixed time, so that limits and stops are seen often. */
+    static final int DWELL_BLOCK_SAMPLES = 4096;
 
     private final Rig rig;
-    private final AdaptiveSweepPlan plan;
+    private final SweepPlan plan;
     private final String responseQuantity;
-    private final BooleanSupplier cancelRequested;
+    private final SweepControl control;
     private final double fs;
     private double driveV;
 
-    StepExecutor(Rig rig, AdaptiveSweepPlan plan, String responseQuantity, BooleanSupplier cancelRequested,
-                 double startDriveV) {
+    StepExecutor(Rig rig, SweepPlan plan, String responseQuantity, SweepControl control) {
         this.rig = rig;
         this.plan = plan;
         this.responseQuantity = responseQuantity;
-        this.cancelRequested = cancelRequested;
+        this.control = control;
         this.fs = rig.acquisition().sampleRateHz();
-        this.driveV = startDriveV;
     }
 
     /** @return the drive now commanded, V */
@@ -47,18 +47,22 @@ final class StepExecutor {
         return driveV;
     }
 
+    /** @param v the drive a step taken over from an earlier session ended at, V */
+    void assumeDriveV(double v) {
+        driveV = v;
+    }
+
     /**
-     * Runs the step.
+     * Measures the step.
      *
-     * @param index the step's place in the sweep
      * @param f the step frequency, Hz
      * @param tauS time constant of the slowest mode near f, s
      * @param controller the force control, or null under drive control
-     * @param rigOriginS rig time the sweep's times count from, s
+     * @param sweepClock the sweep's rig time now, s
      * @param settleEvents told SETTLING at the start and the final settle state before integrating
      * @return what the step gave
      */
-    StepOutcome run(int index, double f, double tauS, LevelController controller, double rigOriginS,
+    StepOutcome run(double f, double tauS, LevelController controller, DoubleSupplier sweepClock,
                     Consumer<SettleState> settleEvents) {
         Exciter exciter = rig.exciter();
         Acquisition acquisition = rig.acquisition();
@@ -69,7 +73,7 @@ final class StepExecutor {
         SettleState state;
         int corrections = 0;
         while (true) {
-            Settled settled = settle(f, tauS);
+            Settled settled = settle(f, tauS, controller != null);
             state = settled.state;
             if (controller == null || controller.within(settled.forceN)) {
                 break;
@@ -86,11 +90,9 @@ final class StepExecutor {
         }
         settleEvents.accept(state);
         double settleS = acquisition.rigTimeS() - settleStartS;
-        int samples = (int) Math.max(16, Math.round(plan.integrationCycles() * fs / f));
-        SampleBlock block = checkedRead(samples, f);
-        CompletedStep step = StepFit.fit(index, block, f, driveV, plan.harmonicOrder(), fs,
-                acquisition.rigTimeS() - rigOriginS);
-        return new StepOutcome(step, state, settleS, Optional.ofNullable(warning));
+        SampleBlock block = checkedRead(plan.integrationSamples(f, fs), f);
+        StepFit fit = StepFit.of(block, f, driveV, plan.harmonicOrder(), fs, sweepClock.getAsDouble());
+        return new StepOutcome(fit, block, state, settleS, Optional.ofNullable(warning));
     }
 
     /** Ramps the drive to a new amplitude at the plan's rate (never a step). */
@@ -113,24 +115,13 @@ final class StepExecutor {
     private record Settled(SettleState state, double forceN) {
     }
 
-    private Settled settle(double f, double tauS) {
-        int cycles = SettleDetector.blockCycles(tauS, f);
-        int blockSamples = (int) Math.max(16, Math.round(cycles * fs / f));
-        double blockS = blockSamples / fs;
-        if (plan.fixedDwellS() > 0) {
-            long remaining = Math.max(1, Math.round(plan.fixedDwellS() * fs));
-            double forceN = Double.NaN;
-            while (remaining > 0) {
-                int n = (int) Math.min(remaining, blockSamples);
-                SampleBlock block = checkedRead(n, f);
-                remaining -= n;
-                if (remaining == 0) {
-                    forceN = SineFit.threeParameter(block.samples()[0], fs, f).amplitude();
-                }
-            }
-            return new Settled(SettleState.FIXED_DWELL, forceN);
+    private Settled settle(double f, double tauS, boolean needForce) {
+        if (!plan.settle().detects()) {
+            return dwell(f, tauS, needForce);
         }
-        SettleDetector detector = new SettleDetector(plan.settleTolerance(), tauS, blockS);
+        int blockSamples = detectionBlockSamples(f, tauS);
+        double blockS = blockSamples / fs;
+        SettleDetector detector = new SettleDetector(plan.settle().tolerance(), tauS, blockS);
         double forceN = Double.NaN;
         while (!detector.done()) {
             SampleBlock block = checkedRead(blockSamples, f);
@@ -148,9 +139,35 @@ final class StepExecutor {
         return new Settled(detector.state(), forceN);
     }
 
-    private SampleBlock checkedRead(int samples, double f) {
-        if (cancelRequested.getAsBoolean()) {
-            throw new SweepStop(false, String.format(Locale.ROOT, "cancelled during the step at %.2f Hz", f));
+    /**
+     * A fixed dwell, read in short blocks; under force control the dwell ends with one detection-length block
+     * (the dwell is lengthened to hold it) whose fit gives the force.
+     */
+    private Settled dwell(double f, double tauS, boolean needForce) {
+        long remaining = (long) Math.ceil(plan.settle().dwellS(f) * fs);
+        int tail = needForce ? detectionBlockSamples(f, tauS) : 0;
+        remaining = Math.max(0, remaining - tail);
+        while (remaining > 0) {
+            int n = (int) Math.min(remaining, DWELL_BLOCK_SAMPLES);
+            checkedRead(n, f);
+            remaining -= n;
+        }
+        if (!needForce) {
+            return new Settled(SettleState.FIXED_DWELL, Double.NaN);
+        }
+        SampleBlock last = checkedRead(tail, f);
+        return new Settled(SettleState.FIXED_DWELL, SineFit.threeParameter(last.samples()[0], fs, f).amplitude());
+    }
+
+    private int detectionBlockSamples(double f, double tauS) {
+        return (int) Math.max(16, Math.round(SettleDetector.blockCycles(tauS, f) * fs / f));
+    }
+
+    /** Reads one block after checking for a stop, and checks it against the limits before anything else. */
+    SampleBlock checkedRead(int samples, double f) {
+        String stop = control.reason();
+        if (stop != null) {
+            throw new SweepStop(false, String.format(Locale.ROOT, "%s during the step at %.2f Hz", stop, f));
         }
         SampleBlock block = rig.acquisition().read(samples);
         Optional<String> trip = plan.limits().check(block.samples(), responseQuantity, f);

@@ -1,6 +1,6 @@
 package org.tautline.driver.sweep;
 
-/** Receives the progress of an adaptive sweep, on the sweep's own thread; a Swing user hands events on with invokeLater. */
+/** Receives the progress of a sweep, on the sweep's own thread; a Swing user hands events on with invokeLater. */
 @FunctionalInterface
 public interface SweepEventListener {
 
@@ -9,18 +9,4 @@ public interface SweepEventListener {
 
     /** @param event what just happened */
     void onEvent(SweepEvent event);
-
-    /**
-     * A listener that passes completed steps on to a stepped-sine progress listener (a progress bar).
-     *
-     * @param listener the stepped-sine listener
-     * @return the adapter
-     */
-    static SweepEventListener completedSteps(SweepListener listener) {
-        return event -> {
-            if (event.completed()) {
-                listener.onStep(event.toProgress());
-            }
-        };
-    }
 }

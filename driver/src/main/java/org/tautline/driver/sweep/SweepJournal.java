@@ -1,20 +1,22 @@
 package org.tautline.driver.sweep;
 
+import org.tautline.driver.spi.SampleBlock;
+
 /**
- * Where a sweep records its progress as it goes, so that an interrupted sweep can be resumed.
+ * Where a sweep records its progress as it goes, so that an interrupted sweep can be continued.
  *
- * <p>The runner calls {@link #stepCompleted(CompletedStep)} after each step's fit and before it
+ * <p>The engine calls {@link #stepCompleted(CompletedStep, SampleBlock)} after each step's fit and before it
  * commands the next step, and {@link #sweepEnded(SweepStatus, String)} once the output is off. An
- * implementation that stores steps makes each one durable before returning; if it cannot, it throws
- * an unchecked exception, and the runner treats that as a fault: the step is not counted and the
- * sweep stops with the output off.
+ * implementation that stores steps makes each one durable before returning; if it cannot, it throws an
+ * unchecked exception, and the engine treats that as a fault: the step is not counted and the sweep stops
+ * with the output off. Steps taken over from an earlier session are not recorded again.
  */
 public interface SweepJournal {
 
     /** A journal that records nothing. */
     SweepJournal NONE = new SweepJournal() {
         @Override
-        public void stepCompleted(CompletedStep step) {
+        public void stepCompleted(CompletedStep step, SampleBlock samples) {
             // Nothing is recorded.
         }
 
@@ -24,8 +26,11 @@ public interface SweepJournal {
         }
     };
 
-    /** @param step a step that was just completed; durable when this returns */
-    void stepCompleted(CompletedStep step);
+    /**
+     * @param step a step that was just completed; durable when this returns
+     * @param samples the integration samples the step's fits were made on, both channels
+     */
+    void stepCompleted(CompletedStep step, SampleBlock samples);
 
     /**
      * @param status how the sweep session ended

@@ -1,13 +1,24 @@
 package org.tautline.driver.sweep;
 
-/** How a sweep session ended. */
+/** How a sweep session ended; in every case the output is off. */
 public enum SweepStatus {
     /** Every planned step was run. */
-    COMPLETED,
-    /** A cancel was requested; the drive was ramped down and switched off. */
-    CANCELLED,
+    COMPLETED("completed"),
+    /** A stop was asked for (a pause, a cancel, an interrupt); the drive was ramped down and switched off. */
+    CANCELLED("cancelled"),
     /** A safety limit was reached; the drive was ramped down and switched off. */
-    LIMIT,
+    LIMIT("stopped at a safety limit"),
     /** A rig fault (or a failure to record a step) stopped the sweep; the output was switched off at once. */
-    FAULT
+    FAULT("stopped by a fault");
+
+    private final String label;
+
+    SweepStatus(String label) {
+        this.label = label;
+    }
+
+    /** @return the status in words, for messages and reports */
+    public String label() {
+        return label;
+    }
 }

@@ -22,29 +22,36 @@ import org.tautline.analysis.signal.SineFit;
 import org.tautline.analysis.signal.SinePhasor;
 import org.tautline.driver.RigException;
 import org.tautline.driver.spi.Rig;
-import org.tautline.driver.sweep.SteppedSineRunner;
-import org.tautline.driver.sweep.SweepListener;
-import org.tautline.driver.sweep.SweepRecord;
+import org.tautline.driver.sweep.SweepControl;
+import org.tautline.driver.sweep.SweepEngine;
+import org.tautline.driver.sweep.SweepEventListener;
+import org.tautline.driver.sweep.SweepResult;
+import org.tautline.driver.sweep.SweepPoint;
 import org.tautline.driver.sweep.SweepStatus;
 
 /** A journal reads back bit for bit, and up to its last valid record when cut or damaged anywhere. */
 class JournalReadBackTest {
 
-    private static SweepRecord sweepWithJournal(Path file, boolean samples) {
+    private static SweepResult sweepWithJournal(Path file, boolean samples) {
         try (Rig rig = JournalFixtures.cleanRig();
              JournalWriter writer = JournalWriter.create(file, JournalFixtures.header(rig, samples), JournalFixtures.CLOCK)) {
-            return new SteppedSineRunner(rig).run(JournalFixtures.PLAN, SweepListener.NONE, () -> false, writer);
+            return new SweepEngine(rig).run(JournalFixtures.PLAN, SweepEventListener.NONE, SweepControl.none(), writer);
         }
+    }
+
+    private static List<SweepPoint> points(JournalContents contents) {
+        return contents.steps().stream().map(JournalStep::point).toList();
     }
 
     @Test
     void readsBackEveryStepBitForBit(@TempDir Path dir) {
         Path file = JournalFixtures.journal(dir);
-        SweepRecord run = sweepWithJournal(file, false);
+        SweepResult run = sweepWithJournal(file, false);
         JournalContents back = JournalReader.read(file);
         assertEquals(Optional.empty(), back.warning());
-        assertEquals(run.points(), back.record().points(), "points rebuilt from the recorded fits are identical");
-        assertTrue(back.record().completed());
+        assertEquals(run.points(), points(back), "points rebuilt from the recorded fits are identical");
+        assertEquals(run.steps(), back.completedSteps(), "steps read back equal the steps run, pass and phase included");
+        assertTrue(back.finished());
         assertEquals("sim", back.header().driver());
         assertEquals(Map.of("scenario", "demo-wire-clean", "seed", "1"), back.header().options());
         assertEquals(JournalFixtures.PLAN, back.header().plan());
@@ -52,7 +59,7 @@ class JournalReadBackTest {
         assertEquals("displacement", back.header().channels().get(1).quantity());
         assertEquals(1, back.sessions().size());
         assertEquals(Optional.of(SweepStatus.COMPLETED), back.lastStatus());
-        assertEquals("all 13 steps completed", back.sessions().get(0).reason());
+        assertEquals("all 1 pass(es) completed, 13 steps", back.sessions().get(0).reason());
         assertEquals(back.fileBytes(), back.validBytes());
     }
 
@@ -90,7 +97,7 @@ class JournalReadBackTest {
     @Test
     void readsUpToTheLastWholeRecordWhereverTheFileIsCut(@TempDir Path dir) throws IOException {
         Path file = JournalFixtures.journal(dir);
-        SweepRecord run = sweepWithJournal(file, false);
+        SweepResult run = sweepWithJournal(file, false);
         byte[] whole = Files.readAllBytes(file);
         List<Integer> starts = lineStarts(whole);
         int endStart = starts.get(starts.size() - 1);
@@ -102,7 +109,7 @@ class JournalReadBackTest {
             int expectedSteps = length < endStart ? 12 : 13;
             int expectedValid = length == whole.length ? length : length < endStart ? lastStepStart : endStart;
             assertEquals(expectedSteps, back.steps().size(), "steps kept when cut at byte " + length);
-            assertEquals(run.points().subList(0, expectedSteps), back.record().points(), "cut at byte " + length);
+            assertEquals(run.points().subList(0, expectedSteps), points(back), "cut at byte " + length);
             assertEquals(expectedValid, back.validBytes(), "valid length when cut at byte " + length);
             if (length == expectedValid) {
                 assertEquals(Optional.empty(), back.warning(), "a cut between records leaves nothing to warn about");
@@ -143,6 +150,31 @@ class JournalReadBackTest {
     }
 
     @Test
+    void aHeaderWithAFlippedBitIsReportedAsDamaged(@TempDir Path dir) throws IOException {
+        Path file = JournalFixtures.journal(dir);
+        sweepWithJournal(file, false);
+        byte[] bytes = Files.readAllBytes(file);
+        bytes[20] ^= 0x02;
+        Files.write(file, bytes);
+        RigException e = assertThrows(RigException.class, () -> JournalReader.read(file));
+        assertEquals("journal " + file + ": the header record (line 1) is damaged: its CRC does not match its contents,"
+                + " so the journal cannot be trusted; keep the file for inspection and run the sweep again into a new"
+                + " folder", e.getMessage());
+    }
+
+    @Test
+    void aJournalWithWindowsLineEndsReadsBackTheSame(@TempDir Path dir) throws IOException {
+        Path file = JournalFixtures.journal(dir);
+        SweepResult run = sweepWithJournal(file, false);
+        String text = Files.readString(file, StandardCharsets.US_ASCII);
+        Path crlf = dir.resolve("crlf");
+        Files.writeString(crlf, text.replace("\n", "\r\n"), StandardCharsets.US_ASCII);
+        JournalContents back = JournalReader.read(crlf);
+        assertEquals(Optional.empty(), back.warning());
+        assertEquals(run.points(), points(back));
+    }
+
+    @Test
     void aValidRecordOutOfPlanOrderIsAFormatError(@TempDir Path dir) throws IOException {
         Path file = JournalFixtures.journal(dir);
         sweepWithJournal(file, false);
@@ -150,7 +182,7 @@ class JournalReadBackTest {
         Files.write(file, List.of(lines.get(0), lines.get(2)), StandardCharsets.US_ASCII);
         RigException e = assertThrows(RigException.class, () -> JournalReader.read(file));
         assertEquals("journal " + file + ": the record at byte " + (lines.get(0).length() + 1) + " does not fit: STEP"
-                + " index 1 where step 0 of the 13 planned was expected", e.getMessage());
+                + " index 1 where index 0 was expected (steps are recorded in order)", e.getMessage());
     }
 
     @Test

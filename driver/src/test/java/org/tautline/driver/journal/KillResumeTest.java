@@ -10,6 +10,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.time.Clock;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.TimeUnit;
 
@@ -17,11 +18,10 @@ import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.Timeout;
 import org.junit.jupiter.api.io.TempDir;
-import org.tautline.driver.spi.Rig;
 import org.tautline.driver.spi.RigDrivers;
-import org.tautline.driver.sweep.SteppedSineRunner;
-import org.tautline.driver.sweep.SweepListener;
-import org.tautline.driver.sweep.SweepRecord;
+import org.tautline.driver.sweep.SweepControl;
+import org.tautline.driver.sweep.SweepEventListener;
+import org.tautline.driver.sweep.SweepResult;
 
 /** A sweep process killed with SIGKILL mid-sweep is resumed from its journal to the uninterrupted result. */
 class KillResumeTest {
@@ -61,12 +61,9 @@ class KillResumeTest {
         assertTrue(kept >= 4 && kept < 40, "steps journaled before the kill: " + kept);
         assertEquals(Optional.empty(), killed.lastStatus(), "a killed sweep leaves no END record");
 
-        SweepRecord resumed = JournaledSweep.resume(RigDrivers.load(List.of()), file, n -> { }, SweepListener.NONE,
-                () -> false, Clock.systemUTC());
-        SweepRecord expected;
-        try (Rig rig = JournalFixtures.cleanRig()) {
-            expected = new SteppedSineRunner(rig).run(LongSweepMain.PLAN, SweepListener.NONE, () -> false);
-        }
+        SweepResult resumed = JournaledSweep.resume(RigDrivers.load(List.of()), file, Map.of(), n -> { },
+                SweepEventListener.NONE, SweepControl.none(), Clock.systemUTC());
+        SweepResult expected = SweepResumeTest.uninterrupted(LongSweepMain.PLAN);
         SweepResumeTest.assertSameSweep(expected, resumed);
         JournalContents after = JournalReader.read(file);
         assertEquals(40, after.steps().size());

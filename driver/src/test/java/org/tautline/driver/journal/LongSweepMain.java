@@ -5,7 +5,8 @@ import java.time.Clock;
 import java.util.List;
 
 import org.tautline.driver.spi.RigDrivers;
-import org.tautline.driver.sweep.SteppedSinePlan;
+import org.tautline.driver.sweep.SweepControl;
+import org.tautline.driver.sweep.SweepPlan;
 
 /**
  * A child process for {@link KillResumeTest}: runs a long journaled sweep on the clean simulated rig.
@@ -15,7 +16,8 @@ import org.tautline.driver.sweep.SteppedSinePlan;
  */
 public final class LongSweepMain {
     /** The plan: {@link JournalFixtures#PLAN} with 40 steps. */
-    static final SteppedSinePlan PLAN = new SteppedSinePlan(150, 300, 40, 400, 0.0, 20, 1.0, 0.02, 3);
+    static final SweepPlan PLAN = SweepPlan.uniform(150, 300, 40, 400, 0.0, 20, 1.0, 0.02, 3,
+            JournalFixtures.wideLimits());
 
     private LongSweepMain() {
     }
@@ -23,14 +25,17 @@ public final class LongSweepMain {
     /** @param args the journal file */
     public static void main(String[] args) {
         JournaledSweep.run(RigDrivers.load(List.of()), "sim", JournalFixtures.SIM_OPTIONS, PLAN, Path.of(args[0]), true,
-                p -> {
-                    System.out.println("journaled " + p.completedSteps());
+                e -> {
+                    if (!e.completed()) {
+                        return;
+                    }
+                    System.out.println("journaled " + e.stepNumber());
                     System.out.flush();
                     try {
                         Thread.sleep(150);
-                    } catch (InterruptedException e) {
+                    } catch (InterruptedException interrupted) {
                         Thread.currentThread().interrupt();
                     }
-                }, () -> false, Clock.systemUTC());
+                }, SweepControl.none(), Clock.systemUTC());
     }
 }

@@ -12,33 +12,43 @@ import org.junit.jupiter.api.io.TempDir;
 import org.tautline.driver.RigException;
 import org.tautline.driver.spi.Rig;
 import org.tautline.driver.spi.RigDrivers;
-import org.tautline.driver.sweep.SteppedSinePlan;
-import org.tautline.driver.sweep.SteppedSineRunner;
-import org.tautline.driver.sweep.SweepListener;
+import org.tautline.driver.sweep.SafetyLimits;
+import org.tautline.driver.sweep.SweepControl;
+import org.tautline.driver.sweep.SweepEngine;
+import org.tautline.driver.sweep.SweepEventListener;
+import org.tautline.driver.sweep.SweepJournal;
+import org.tautline.driver.sweep.SweepPlan;
+import org.tautline.driver.sweep.SweepStatus;
 import org.tautline.driver.sweep.SweepPoint;
-import org.tautline.driver.sweep.SweepRecord;
+import org.tautline.driver.sweep.SweepResult;
 
 /** The replay driver plays a journal back: raw samples exactly, phasors as clean sines. */
 class ReplayRigTest {
     private static final RigDrivers DRIVERS = RigDrivers.load(List.of());
 
     /** The noisy demo wire, so that exact replay of the raw samples includes the noise. */
-    private static SweepRecord record(Path file, boolean samples) {
-        return JournaledSweep.run(DRIVERS, "sim", Map.of(), JournalFixtures.PLAN, file, samples, SweepListener.NONE,
-                () -> false, JournalFixtures.CLOCK);
+    private static SweepResult record(Path file, boolean samples) {
+        return JournaledSweep.run(DRIVERS, "sim", Map.of(), JournalFixtures.PLAN, file, samples, SweepEventListener.NONE,
+                SweepControl.none(), JournalFixtures.CLOCK);
     }
 
-    private static SweepRecord replay(Path file, SteppedSinePlan plan) {
+    private static SweepResult replay(Path file, SweepPlan plan) {
         try (Rig rig = DRIVERS.find("replay").open(Map.of("journal", file.toString()))) {
-            return new SteppedSineRunner(rig).run(plan, SweepListener.NONE, () -> false);
+            return new SweepEngine(rig).run(plan, SweepEventListener.NONE, SweepControl.none(), SweepJournal.NONE);
         }
+    }
+
+    /** The recorded plan with a drive limit the replay rig accepts (it drives no higher than was recorded). */
+    private static SweepPlan replayPlan(double startHz, double settleCycles, double driveV) {
+        return SweepPlan.uniform(startHz, 300, 13, settleCycles, 0.0, 20, driveV, 0.02, 3,
+                new SafetyLimits(1.0, 10.0, 0.01, 0.01));
     }
 
     @Test
     void replayingKeptSamplesWithTheRecordedPlanGivesTheRecordedSweep(@TempDir Path dir) {
         Path file = dir.resolve("journal");
-        SweepRecord recorded = record(file, true);
-        SweepRecord replayed = replay(file, JournalFixtures.PLAN);
+        SweepResult recorded = record(file, true);
+        SweepResult replayed = replay(file, replayPlan(150, 400, 1.0));
         for (int i = 0; i < recorded.points().size(); i++) {
             SweepPoint r = recorded.points().get(i);
             SweepPoint p = replayed.points().get(i);
@@ -52,10 +62,9 @@ class ReplayRigTest {
     @Test
     void replayingPhasorsGivesTheRecordedFrfFromCleanSines(@TempDir Path dir) {
         Path file = dir.resolve("journal");
-        SweepRecord recorded = record(file, false);
+        SweepResult recorded = record(file, false);
         // Half the drive: the replayed sines scale with it, so the FRF (response / force) is unchanged.
-        SteppedSinePlan half = new SteppedSinePlan(150, 300, 13, 40, 0.0, 20, 0.5, 0.02, 3);
-        SweepRecord replayed = replay(file, half);
+        SweepResult replayed = replay(file, replayPlan(150, 40, 0.5));
         for (int i = 0; i < recorded.points().size(); i++) {
             SweepPoint r = recorded.points().get(i);
             SweepPoint p = replayed.points().get(i);
@@ -70,14 +79,14 @@ class ReplayRigTest {
     void refusesAFrequencyThatWasNotRecordedAndAHigherDrive(@TempDir Path dir) {
         Path file = dir.resolve("journal");
         record(file, false);
-        SteppedSinePlan other = new SteppedSinePlan(100, 300, 13, 40, 0.0, 20, 1.0, 0.02, 3);
-        RigException e = assertThrows(RigException.class, () -> replay(file, other));
-        assertEquals("sweep stopped by a fault at step 1 of 13 (100.00 Hz); the output is off and the 0 completed step(s)"
-                + " are kept: replay rig: journal " + file + " has no step at 100.0 Hz; it holds 13 step(s) from 150.0 to"
-                + " 300.0 Hz", e.getMessage());
-        SteppedSinePlan louder = new SteppedSinePlan(150, 300, 13, 40, 0.0, 20, 2.0, 0.02, 3);
+        SweepResult other = replay(file, replayPlan(100, 40, 1.0));
+        assertEquals(SweepStatus.FAULT, other.status());
+        assertEquals("replay rig: journal " + file + " has no step at 100.0 Hz; it holds 13 step(s) from 150.0 to"
+                + " 300.0 Hz", other.reason());
+        SweepPlan louder = SweepPlan.uniform(150, 300, 13, 40, 0.0, 20, 2.0, 0.02, 3, JournalFixtures.wideLimits());
         RigException loud = assertThrows(RigException.class, () -> replay(file, louder));
-        assertEquals("sweep plan: drive amplitude 2.0 V is above the exciter's limit of 1.0 V", loud.getMessage());
+        assertEquals("sweep plan: the drive limit 5.0 V is above the exciter's limit of 1.0 V; lower limits.driveV",
+                loud.getMessage());
     }
 
     @Test

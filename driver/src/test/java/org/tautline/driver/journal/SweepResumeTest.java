@@ -12,7 +12,6 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import java.util.concurrent.atomic.AtomicInteger;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -22,22 +21,33 @@ import org.tautline.driver.spi.Rig;
 import org.tautline.driver.spi.RigDriver;
 import org.tautline.driver.spi.RigDrivers;
 import org.tautline.driver.spi.RigOption;
-import org.tautline.driver.sweep.SteppedSineRunner;
-import org.tautline.driver.sweep.SweepFaultException;
-import org.tautline.driver.sweep.SweepListener;
+import org.tautline.driver.sweep.SweepControl;
+import org.tautline.driver.sweep.SweepEngine;
+import org.tautline.driver.sweep.SweepEvent;
+import org.tautline.driver.sweep.SweepEventListener;
+import org.tautline.driver.sweep.SweepJournal;
+import org.tautline.driver.sweep.SweepPlan;
 import org.tautline.driver.sweep.SweepPoint;
-import org.tautline.driver.sweep.SweepProgress;
-import org.tautline.driver.sweep.SweepRecord;
+import org.tautline.driver.sweep.SweepResult;
 import org.tautline.driver.sweep.SweepStatus;
 
-/** An interrupted sweep (cancel, rig fault, cut journal) resumed from its journal equals an uninterrupted sweep. */
+/** An interrupted sweep (stop, rig fault, cut journal) resumed from its journal equals an uninterrupted sweep. */
 class SweepResumeTest {
     private static final RigDrivers DRIVERS = RigDrivers.load(List.of());
 
-    static SweepRecord uninterrupted() {
+    static SweepResult uninterrupted(SweepPlan plan) {
         try (Rig rig = JournalFixtures.cleanRig()) {
-            return new SteppedSineRunner(rig).run(JournalFixtures.PLAN, SweepListener.NONE, () -> false);
+            return new SweepEngine(rig).run(plan, SweepEventListener.NONE, SweepControl.none(), SweepJournal.NONE);
         }
+    }
+
+    /** A listener that asks for a stop once a number of steps have completed. */
+    static SweepEventListener stopAfter(int steps, SweepControl control) {
+        return e -> {
+            if (e.completed() && e.stepNumber() >= steps) {
+                control.requestStop("stopped by the test");
+            }
+        };
     }
 
     /**
@@ -47,8 +57,8 @@ class SweepResumeTest {
      * ADC's quantisation differs between the two histories at about 1e-6 (measured on this plan);
      * the tolerance is ten times the larger.
      */
-    static void assertSameSweep(SweepRecord expected, SweepRecord actual) {
-        assertTrue(actual.completed(), "the resumed sweep is complete");
+    static void assertSameSweep(SweepResult expected, SweepResult actual) {
+        assertTrue(actual.completed(), "the resumed sweep is complete: " + actual.reason());
         assertEquals(expected.points().size(), actual.points().size());
         for (int i = 0; i < expected.points().size(); i++) {
             SweepPoint e = expected.points().get(i);
@@ -61,34 +71,63 @@ class SweepResumeTest {
     }
 
     @Test
-    void aCancelledSweepResumedEqualsAnUninterruptedOne(@TempDir Path dir) {
+    void aStoppedSweepResumedEqualsAnUninterruptedOne(@TempDir Path dir) {
         Path file = JournalFixtures.journal(dir);
-        AtomicInteger steps = new AtomicInteger();
-        SweepRecord first = JournaledSweep.run(DRIVERS, "sim", Map.of("scenario", "demo-wire-clean"), JournalFixtures.PLAN,
-                file, false, p -> steps.incrementAndGet(), () -> steps.get() >= 5, JournalFixtures.CLOCK);
+        SweepControl control = new SweepControl();
+        SweepResult first = JournaledSweep.run(DRIVERS, "sim", Map.of("scenario", "demo-wire-clean"), JournalFixtures.PLAN,
+                file, false, stopAfter(5, control), control, JournalFixtures.CLOCK);
         assertFalse(first.completed());
         assertEquals(5, first.points().size());
         assertEquals(Optional.of(SweepStatus.CANCELLED), JournalReader.read(file).lastStatus());
 
         List<String> notices = new ArrayList<>();
-        List<SweepProgress> progress = new ArrayList<>();
-        SweepRecord resumed = JournaledSweep.resume(DRIVERS, file, notices::add, progress::add, () -> false,
-                JournalFixtures.CLOCK);
-        assertSameSweep(uninterrupted(), resumed);
+        List<SweepEvent> progress = new ArrayList<>();
+        SweepResult resumed = JournaledSweep.resume(DRIVERS, file, Map.of(), notices::add, e -> {
+            if (e.completed()) {
+                progress.add(e);
+            }
+        }, SweepControl.none(), JournalFixtures.CLOCK);
+        assertSameSweep(uninterrupted(JournalFixtures.PLAN), resumed);
         assertEquals(first.points(), resumed.points().subList(0, 5), "the recorded steps are kept as they were");
-        assertEquals(8, progress.size(), "only the 8 steps not done are run");
-        assertEquals(6, progress.get(0).completedSteps(), "progress counts the recorded steps as done");
-        assertEquals(List.of("resuming " + file + " at step 6 of 13 on Tautline simulated rig (model of specimen, shaker"
-                + " and sensors), seed 1"), notices);
+        assertEquals(13, progress.size(), "the 5 recorded steps are reported, then the 8 new ones");
+        assertEquals(6, progress.get(5).stepNumber(), "progress counts the recorded steps as done");
+        assertEquals(List.of("resuming " + file + " after 5 completed step(s) on Tautline simulated rig (model of specimen,"
+                + " shaker and sensors), seed 1"), notices);
 
         JournalContents after = JournalReader.read(file);
         assertEquals(Optional.empty(), after.warning());
         assertEquals(13, after.steps().size());
         assertEquals(2, after.sessions().size());
-        assertEquals("cancelled after 5 of 13 steps", after.sessions().get(0).reason());
+        assertTrue(after.sessions().get(0).reason().startsWith("stopped by the test during the step at"),
+                after.sessions().get(0).reason());
         assertEquals(5, after.sessions().get(1).firstStep());
         assertEquals(Optional.of(SweepStatus.COMPLETED), after.lastStatus());
-        assertEquals(resumed.points(), after.record().points(), "the journal holds the whole resumed sweep");
+        assertEquals(resumed.steps(), after.completedSteps(), "the journal holds the whole resumed sweep");
+    }
+
+    @Test
+    void anAdaptiveSweepResumedMakesTheSameDecisions(@TempDir Path dir) {
+        SweepPlan plan = JournalFixtures.adaptivePlan();
+        SweepResult whole = uninterrupted(plan);
+        assertTrue(whole.completed(), whole.reason());
+        Path file = JournalFixtures.journal(dir);
+        SweepControl control = new SweepControl();
+        int stopAt = whole.steps().size() / 2;
+        SweepResult first = JournaledSweep.run(DRIVERS, "sim", JournalFixtures.SIM_OPTIONS, plan, file, false,
+                stopAfter(stopAt, control), control, JournalFixtures.CLOCK);
+        assertEquals(stopAt, first.steps().size(), "stopped half way, in the refinement");
+        SweepResult resumed = JournaledSweep.resume(DRIVERS, file, Map.of(), n -> { }, SweepEventListener.NONE,
+                SweepControl.none(), JournalFixtures.CLOCK);
+        assertTrue(resumed.completed(), resumed.reason());
+        assertEquals(first.steps(), resumed.steps().subList(0, stopAt), "the recorded steps are taken over as they were");
+        assertEquals(whole.passes().get(0).modes().size(), resumed.passes().get(0).modes().size(),
+                "the same resonances are refined");
+        for (int i = 0; i < whole.passes().get(0).modes().size(); i++) {
+            double f = whole.passes().get(0).modes().get(i).mode().frequencyHz();
+            double fr = resumed.passes().get(0).modes().get(i).mode().frequencyHz();
+            double std = whole.passes().get(0).modes().get(i).frequencyStdHz();
+            assertEquals(f, fr, 3 * std + 1e-6 * f, "resonance " + i + " agrees within its standard error");
+        }
     }
 
     @Test
@@ -96,43 +135,42 @@ class SweepResumeTest {
         Path file = JournalFixtures.journal(dir);
         Rig sim = JournalFixtures.cleanRig();
         FaultyRig faulty = new FaultyRig(sim, 7);
-        SweepFaultException e;
+        SweepResult stopped;
         try (JournalWriter writer = JournalWriter.create(file, JournalFixtures.header(sim, false), JournalFixtures.CLOCK)) {
-            e = assertThrows(SweepFaultException.class, () -> new SteppedSineRunner(faulty).run(JournalFixtures.PLAN,
-                    SweepListener.NONE, () -> false, writer));
+            stopped = new SweepEngine(faulty).run(JournalFixtures.PLAN, SweepEventListener.NONE, SweepControl.none(),
+                    writer);
         }
         assertFalse(sim.exciter().isOutputEnabled(), "the output is off after the fault");
         sim.close();
-        double f7 = JournalFixtures.PLAN.frequenciesHz()[7];
-        assertEquals(String.format(java.util.Locale.ROOT, "sweep stopped by a fault at step 8 of 13 (%.2f Hz); the output"
-                + " is off and the 7 completed step(s) are kept: %s", f7, FaultyRig.FAULT), e.getMessage());
-        assertEquals(7, e.partial().points().size());
+        assertEquals(SweepStatus.FAULT, stopped.status());
+        assertEquals(FaultyRig.FAULT, stopped.reason());
+        assertEquals(7, stopped.points().size());
         JournalContents recorded = JournalReader.read(file);
         assertEquals(7, recorded.steps().size(), "the step in progress is discarded");
         assertEquals(Optional.of(SweepStatus.FAULT), recorded.lastStatus());
         assertEquals(FaultyRig.FAULT, recorded.sessions().get(0).reason());
 
-        SweepRecord resumed = JournaledSweep.resume(DRIVERS, file, n -> { }, SweepListener.NONE, () -> false,
-                JournalFixtures.CLOCK);
-        assertSameSweep(uninterrupted(), resumed);
+        SweepResult resumed = JournaledSweep.resume(DRIVERS, file, Map.of(), n -> { }, SweepEventListener.NONE,
+                SweepControl.none(), JournalFixtures.CLOCK);
+        assertSameSweep(uninterrupted(JournalFixtures.PLAN), resumed);
     }
 
     @Test
     void aJournalCutMidRecordIsTrimmedAndResumed(@TempDir Path dir) throws Exception {
         Path file = JournalFixtures.journal(dir);
-        AtomicInteger steps = new AtomicInteger();
+        SweepControl control = new SweepControl();
         JournaledSweep.run(DRIVERS, "sim", JournalFixtures.SIM_OPTIONS, JournalFixtures.PLAN, file, true,
-                p -> steps.incrementAndGet(), () -> steps.get() >= 9, JournalFixtures.CLOCK);
+                stopAfter(9, control), control, JournalFixtures.CLOCK);
         byte[] bytes = Files.readAllBytes(file);
         List<Integer> starts = JournalReadBackTest.lineStarts(bytes);
         int ninthStep = starts.get(9);
         Files.write(file, Arrays.copyOf(bytes, ninthStep + 100), java.nio.file.StandardOpenOption.TRUNCATE_EXISTING);
         List<String> notices = new ArrayList<>();
-        SweepRecord resumed = JournaledSweep.resume(DRIVERS, file, notices::add, SweepListener.NONE, () -> false,
-                JournalFixtures.CLOCK);
+        SweepResult resumed = JournaledSweep.resume(DRIVERS, file, Map.of(), notices::add, SweepEventListener.NONE,
+                SweepControl.none(), JournalFixtures.CLOCK);
         assertTrue(notices.get(0).startsWith("journal " + file + ": read up to byte " + ninthStep + " of "
                 + (ninthStep + 100) + "; the record starting there is incomplete"), notices.get(0));
-        assertSameSweep(uninterrupted(), resumed);
+        assertSameSweep(uninterrupted(JournalFixtures.PLAN), resumed);
         JournalContents after = JournalReader.read(file);
         assertEquals(Optional.empty(), after.warning(), "the torn record was cut off before appending");
         assertEquals(13, after.steps().size());
@@ -145,9 +183,9 @@ class SweepResumeTest {
     @Test
     void aResumeRefusesARigThatAnswersDifferently(@TempDir Path dir) {
         Path file = JournalFixtures.journal(dir);
-        AtomicInteger steps = new AtomicInteger();
+        SweepControl control = new SweepControl();
         JournaledSweep.run(DRIVERS, "sim", JournalFixtures.SIM_OPTIONS, JournalFixtures.PLAN, file, false,
-                p -> steps.incrementAndGet(), () -> steps.get() >= 2, JournalFixtures.CLOCK);
+                stopAfter(2, control), control, JournalFixtures.CLOCK);
         RigDriver otherSeed = new RigDriver() {
             @Override
             public String name() {
@@ -170,7 +208,7 @@ class SweepResumeTest {
             }
         };
         RigException e = assertThrows(RigException.class, () -> JournaledSweep.resume(RigDrivers.of(List.of(otherSeed)),
-                file, n -> { }, SweepListener.NONE, () -> false, JournalFixtures.CLOCK));
+                file, Map.of(), n -> { }, SweepEventListener.NONE, SweepControl.none(), JournalFixtures.CLOCK));
         assertEquals("journal " + file + " was recorded on 'Tautline simulated rig (model of specimen, shaker and sensors),"
                 + " seed 1' but the rig now answers 'Tautline simulated rig (model of specimen, shaker and sensors), seed 2';"
                 + " a sweep can only be resumed on the rig it started on", e.getMessage());
@@ -178,14 +216,31 @@ class SweepResumeTest {
     }
 
     @Test
-    void resumingAFinishedJournalRunsNothing(@TempDir Path dir) {
+    void aResumeMayChangeAnOptionButNotTheRig(@TempDir Path dir) {
         Path file = JournalFixtures.journal(dir);
-        SweepRecord run = JournaledSweep.run(DRIVERS, "sim", JournalFixtures.SIM_OPTIONS, JournalFixtures.PLAN, file, false,
-                SweepListener.NONE, () -> false, JournalFixtures.CLOCK);
-        List<String> notices = new ArrayList<>();
-        SweepRecord again = JournaledSweep.resume(RigDrivers.of(List.of()), file, notices::add, SweepListener.NONE,
-                () -> false, JournalFixtures.CLOCK);
-        assertEquals(run.points(), again.points());
-        assertEquals(List.of("journal " + file + " already holds all 13 steps; nothing to resume"), notices);
+        SweepControl control = new SweepControl();
+        JournaledSweep.run(DRIVERS, "sim", JournalFixtures.SIM_OPTIONS, JournalFixtures.PLAN, file, false,
+                stopAfter(2, control), control, JournalFixtures.CLOCK);
+        RigException unknown = assertThrows(RigException.class, () -> JournaledSweep.resume(DRIVERS, file,
+                Map.of("port", "/dev/ttyUSB1"), n -> { }, SweepEventListener.NONE, SweepControl.none(),
+                JournalFixtures.CLOCK));
+        assertEquals("the sim rig of journal " + file + " has no option 'port'; its options are scenario, seed",
+                unknown.getMessage());
+        RigException other = assertThrows(RigException.class, () -> JournaledSweep.resume(DRIVERS, file,
+                Map.of("seed", "3"), n -> { }, SweepEventListener.NONE, SweepControl.none(), JournalFixtures.CLOCK));
+        assertTrue(other.getMessage().endsWith("a sweep can only be resumed on the rig it started on"), other.getMessage());
+        assertEquals(2, JournalReader.read(file).steps().size(), "nothing was appended");
+    }
+
+    @Test
+    void resumingAFinishedJournalIsRefusedWithoutOpeningARig(@TempDir Path dir) {
+        Path file = JournalFixtures.journal(dir);
+        SweepResult run = JournaledSweep.run(DRIVERS, "sim", JournalFixtures.SIM_OPTIONS, JournalFixtures.PLAN, file, false,
+                SweepEventListener.NONE, SweepControl.none(), JournalFixtures.CLOCK);
+        assertTrue(run.completed());
+        RigException e = assertThrows(RigException.class, () -> JournaledSweep.resume(RigDrivers.of(List.of()), file,
+                Map.of(), n -> { }, SweepEventListener.NONE, SweepControl.none(), JournalFixtures.CLOCK));
+        assertEquals("journal " + file + " records a sweep that ran to its end (13 steps); there is nothing to resume",
+                e.getMessage());
     }
 }

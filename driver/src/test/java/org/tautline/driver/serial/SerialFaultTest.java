@@ -18,10 +18,9 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.EnumSource;
 import org.tautline.driver.RigLinkException;
 import org.tautline.driver.RigLinkException.Kind;
-import org.tautline.driver.sweep.SweepFaultException;
-import org.tautline.driver.sweep.SteppedSineRunner;
+import org.tautline.driver.sweep.SweepStatus;
 import org.tautline.driver.sweep.SweepPoint;
-import org.tautline.driver.sweep.SweepRecord;
+import org.tautline.driver.sweep.SweepResult;
 
 @Timeout(value = 120)
 class SerialFaultTest {
@@ -73,21 +72,21 @@ class SerialFaultTest {
         List<SweepPoint> seen = new ArrayList<>();
         try (VirtualRigServer server = VirtualRigServer.startOnPty(SerialSweepTest.CONFIG, 921600);
              SerialRig rig = SerialRig.open(server.hostPath(), quick())) {
-            SweepFaultException stopped = assertThrows(SweepFaultException.class,
-                    () -> new SteppedSineRunner(rig).run(SerialSweepTest.plan(), p -> {
-                        seen.add(p.point());
-                        if (p.completedSteps() == FAULT_AFTER_STEP) {
-                            fault.inject.accept(server);
-                        }
-                    }, () -> false));
-            assertTrue(stopped.getCause() instanceof RigLinkException, "the sweep names the link fault: " + stopped);
-            RigLinkException e = (RigLinkException) stopped.getCause();
-            assertEquals(fault.kind, e.kind(), e.getMessage());
-            assertEquals(seen.size(), stopped.partial().points().size(), "the sweep keeps every completed step");
-            assertTrue(e.getMessage().contains(server.hostPath()), e.getMessage());
+            SweepResult stopped = SerialSweepTest.sweep(rig, SerialSweepTest.plan(), p -> {
+                if (!p.completed()) {
+                    return;
+                }
+                seen.add(p.point());
+                if (p.stepNumber() == FAULT_AFTER_STEP) {
+                    fault.inject.accept(server);
+                }
+            });
+            assertEquals(SweepStatus.FAULT, stopped.status(), stopped.reason());
+            assertEquals(seen.size(), stopped.points().size(), "the sweep keeps every completed step");
+            assertTrue(stopped.reason().contains(server.hostPath()), stopped.reason());
             SerialRig.FaultRecord record = rig.fault();
             assertNotNull(record);
-            assertEquals(fault.kind, record.fault().kind());
+            assertEquals(fault.kind, record.fault().kind(), record.fault().getMessage());
             assertFalse(rig.exciter().isOutputEnabled());
             // The steps done before the fault are kept, and are those of the in-process sweep.
             assertTrue(seen.size() >= FAULT_AFTER_STEP && seen.size() < reference.size(), "steps " + seen.size());
@@ -120,14 +119,14 @@ class SerialFaultTest {
     @ParameterizedTest
     @EnumSource(Recoverable.class)
     void aRecoverableFaultIsRepairedAndTheSweepStillEqualsTheInProcessOne(Recoverable fault) {
-        SweepRecord reference = SerialSweepTest.inProcess();
+        SweepResult reference = SerialSweepTest.inProcess();
         try (VirtualRigServer server = VirtualRigServer.startOnPty(SerialSweepTest.CONFIG, 921600);
              SerialRig rig = SerialRig.open(server.hostPath(), quick())) {
-            SweepRecord record = new SteppedSineRunner(rig).run(SerialSweepTest.plan(), p -> {
-                if (p.completedSteps() == FAULT_AFTER_STEP) {
+            SweepResult record = SerialSweepTest.sweep(rig, SerialSweepTest.plan(), p -> {
+                if (p.completed() && p.stepNumber() == FAULT_AFTER_STEP) {
                     fault.inject.accept(server);
                 }
-            }, () -> false);
+            });
             assertTrue(record.completed());
             assertNull(rig.fault());
             for (int i = 0; i < reference.points().size(); i++) {

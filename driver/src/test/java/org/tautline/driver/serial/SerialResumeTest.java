@@ -22,12 +22,12 @@ import org.tautline.driver.journal.JournalReader;
 import org.tautline.driver.journal.JournaledSweep;
 import org.tautline.driver.sim.SimulatedRig;
 import org.tautline.driver.spi.RigDrivers;
-import org.tautline.driver.sweep.SteppedSinePlan;
-import org.tautline.driver.sweep.SteppedSineRunner;
-import org.tautline.driver.sweep.SweepFaultException;
-import org.tautline.driver.sweep.SweepListener;
+import org.tautline.driver.sweep.SweepControl;
+import org.tautline.driver.sweep.SweepEventListener;
+import org.tautline.driver.sweep.SweepPlan;
+import org.tautline.driver.sweep.SweepStatus;
 import org.tautline.driver.sweep.SweepPoint;
-import org.tautline.driver.sweep.SweepRecord;
+import org.tautline.driver.sweep.SweepResult;
 
 /**
  * A journaled sweep over the pty is stopped by each link fault, then resumed through the serial
@@ -54,13 +54,13 @@ class SerialResumeTest {
     }
 
     /** 16 steps across the demo wire's fundamental; 400 settle cycles (about 9 time constants) so a resumed rig at rest matches. */
-    private static SteppedSinePlan plan() {
-        return new SteppedSinePlan(240, 260, 16, 400, 0.0, 8, 1.0, 0.02, 3);
+    private static SweepPlan plan() {
+        return SweepPlan.uniform(240, 260, 16, 400, 0.0, 8, 1.0, 0.02, 3, SerialSweepTest.wideLimits());
     }
 
-    private static SweepRecord uninterrupted() {
+    private static SweepResult uninterrupted() {
         try (SimulatedRig rig = new SimulatedRig(SerialSweepTest.CONFIG)) {
-            return new SteppedSineRunner(rig).run(plan(), SweepListener.NONE, () -> false);
+            return SerialSweepTest.sweep(rig, plan(), SweepEventListener.NONE);
         }
     }
 
@@ -70,7 +70,7 @@ class SerialResumeTest {
     @ParameterizedTest
     @EnumSource(LinkFault.class)
     void aFaultedSweepResumesToTheUninterruptedResult(LinkFault fault) throws IOException {
-        SweepRecord reference = uninterrupted();
+        SweepResult reference = uninterrupted();
         Path link = dir.resolve("rig-port");
         Path journal = dir.resolve("journal");
         Map<String, String> options = Map.of("port", link.toString(), "baud", "921600", "timeoutMs", "400");
@@ -78,14 +78,13 @@ class SerialResumeTest {
         VirtualRigServer first = VirtualRigServer.startOnPty(SerialSweepTest.CONFIG, 921600);
         try {
             Files.createSymbolicLink(link, Path.of(first.hostPath()));
-            SweepFaultException stopped = assertThrows(SweepFaultException.class,
-                    () -> JournaledSweep.run(drivers, "serial", options, plan(), journal, false, p -> {
-                        if (p.completedSteps() == FAULT_AFTER_STEP) {
-                            fault.inject.accept(first);
-                        }
-                    }, () -> false, Clock.systemUTC()));
-            assertTrue(stopped.getCause() instanceof RigLinkException, stopped.toString());
-            assertEquals(fault.kind, ((RigLinkException) stopped.getCause()).kind(), stopped.getMessage());
+            SweepResult stopped = JournaledSweep.run(drivers, "serial", options, plan(), journal, false, p -> {
+                if (p.completed() && p.stepNumber() == FAULT_AFTER_STEP) {
+                    fault.inject.accept(first);
+                }
+            }, SweepControl.none(), Clock.systemUTC());
+            assertEquals(SweepStatus.FAULT, stopped.status(), stopped.reason());
+            assertTrue(stopped.reason().contains(link.toString()), fault + ": " + stopped.reason());
             assertFalse(first.outputEnabled(), "the device's output is off after the fault");
             assertEquals(FAULT_AFTER_STEP, JournalReader.read(journal).steps().size(), "every completed step journaled");
         } finally {
@@ -95,8 +94,8 @@ class SerialResumeTest {
         try (VirtualRigServer second = VirtualRigServer.startOnPty(SerialSweepTest.CONFIG, 921600)) {
             Files.delete(link);
             Files.createSymbolicLink(link, Path.of(second.hostPath()));
-            SweepRecord resumed = JournaledSweep.resume(drivers, journal, notice -> { }, SweepListener.NONE, () -> false,
-                    Clock.systemUTC());
+            SweepResult resumed = JournaledSweep.resume(drivers, journal, Map.of(), notice -> { },
+                    SweepEventListener.NONE, SweepControl.none(), Clock.systemUTC());
             assertTrue(resumed.completed());
             List<SweepPoint> got = resumed.points();
             assertEquals(reference.points().size(), got.size());

@@ -11,33 +11,52 @@ import org.tautline.analysis.frf.Frf;
 import org.tautline.driver.sim.SimulatedRig;
 import org.tautline.driver.sim.SimulationConfig;
 import org.tautline.driver.sim.SimulationConfigs;
-import org.tautline.driver.sweep.SteppedSinePlan;
-import org.tautline.driver.sweep.SteppedSineRunner;
-import org.tautline.driver.sweep.SweepListener;
-import org.tautline.driver.sweep.SweepRecord;
+import org.tautline.driver.spi.Rig;
+import org.tautline.driver.sweep.SafetyLimits;
+import org.tautline.driver.sweep.SweepControl;
+import org.tautline.driver.sweep.SweepEngine;
+import org.tautline.driver.sweep.SweepEventListener;
+import org.tautline.driver.sweep.SweepJournal;
+import org.tautline.driver.sweep.SweepPlan;
+import org.tautline.driver.sweep.SweepResult;
 
 @Timeout(value = 120)
 class SerialSweepTest {
     static final SimulationConfig CONFIG = SimulationConfigs.demoWire();
 
     /** 40 steps across the first mode of the demo wire (about 250 Hz), short settle, 8 cycles each. */
-    static SteppedSinePlan plan() {
-        return new SteppedSinePlan(235, 265, 40, 60, 0.0, 8, SimulationConfigs.DEMO_DRIVE_V, 0.02, 3);
+    static SweepPlan plan() {
+        return SweepPlan.uniform(235, 265, 40, 60, 0.0, 8, SimulationConfigs.DEMO_DRIVE_V, 0.02, 3, wideLimits());
     }
 
-    static SweepRecord inProcess() {
+    /** Limits far above what these sweeps reach: the serial tests are about the link. */
+    static SafetyLimits wideLimits() {
+        return new SafetyLimits(5.0, 10.0, 0.01, 0.01);
+    }
+
+    /**
+     * @param rig the rig
+     * @param plan the plan
+     * @param listener progress
+     * @return the sweep, run with no journal and no stop
+     */
+    static SweepResult sweep(Rig rig, SweepPlan plan, SweepEventListener listener) {
+        return new SweepEngine(rig).run(plan, listener, SweepControl.none(), SweepJournal.NONE);
+    }
+
+    static SweepResult inProcess() {
         try (SimulatedRig rig = new SimulatedRig(CONFIG)) {
-            return new SteppedSineRunner(rig).run(plan(), SweepListener.NONE, () -> false);
+            return sweep(rig, plan(), SweepEventListener.NONE);
         }
     }
 
     @Test
     void float64SweepOverThePtyEqualsTheInProcessSweepExactly() {
-        SweepRecord reference = inProcess();
+        SweepResult reference = inProcess();
         try (VirtualRigServer server = VirtualRigServer.startOnPty(CONFIG, 921600);
              SerialRig rig = SerialRig.open(server.hostPath(),
                      SerialLinkSettings.defaults().withFormat(SampleFormat.FLOAT64_LE))) {
-            SweepRecord serial = new SteppedSineRunner(rig).run(plan(), SweepListener.NONE, () -> false);
+            SweepResult serial = sweep(rig, plan(), SweepEventListener.NONE);
             assertTrue(serial.completed());
             Frf a = reference.toFrf();
             Frf b = serial.toFrf();
@@ -56,7 +75,7 @@ class SerialSweepTest {
         Frf a = inProcess().toFrf();
         try (VirtualRigServer server = VirtualRigServer.startOnPty(CONFIG, 921600);
              SerialRig rig = SerialRig.open(server.hostPath())) {
-            Frf b = new SteppedSineRunner(rig).run(plan(), SweepListener.NONE, () -> false).toFrf();
+            Frf b = sweep(rig, plan(), SweepEventListener.NONE).toFrf();
             assertEquals(a.size(), b.size());
             double[] variance = a.variance().orElseThrow();
             for (int i = 0; i < a.size(); i++) {

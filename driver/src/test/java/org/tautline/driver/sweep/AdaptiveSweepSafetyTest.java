@@ -24,9 +24,8 @@ import org.tautline.driver.sim.SimulatedRig;
 class AdaptiveSweepSafetyTest {
     private static final double RAMP_S = 0.1;
 
-    private static AdaptiveSweepPlan plan(SafetyLimits limits) {
-        return new AdaptiveSweepPlan(200, 260, LevelMode.DRIVE, List.of(1.0), 2e-5, 0.02, limits, SweepDirection.UP,
-                600, 9, 0.002, 0.01, 64, 0.0, 0.01, 1.0, 20.0, RAMP_S, 1);
+    private static SweepPlan plan(SafetyLimits limits) {
+        return SweepFixtures.adaptive(200, 260, LevelMode.DRIVE, 1.0, limits, 9, 1.0, RAMP_S);
     }
 
     @ParameterizedTest(name = "{0}")
@@ -39,8 +38,8 @@ class AdaptiveSweepSafetyTest {
         RecordingRig rig = new RecordingRig(new SimulatedRig(SweepFixtures.singlePolarisationWire()));
         RecordingJournal journal = new RecordingJournal();
         SafetyLimits limits = new SafetyLimits(driveV, forceN, response, displacementM);
-        AdaptiveSweepResult result = new AdaptiveSweepRunner(rig).run(plan(limits), SweepEventListener.NONE,
-                () -> false, journal);
+        SweepResult result = new SweepEngine(rig).run(plan(limits), SweepEventListener.NONE, SweepControl.none(),
+                journal);
 
         assertEquals(SweepStatus.LIMIT, result.status(), result.reason());
         assertTrue(result.reason().startsWith("safety limit reached: " + what), result.reason());
@@ -70,8 +69,8 @@ class AdaptiveSweepSafetyTest {
         RecordingRig rig = new RecordingRig(new SimulatedRig(SweepFixtures.singlePolarisationWire()));
         rig.readsBeforeCancel = 30;
         RecordingJournal journal = new RecordingJournal();
-        AdaptiveSweepResult result = new AdaptiveSweepRunner(rig).run(plan(SweepFixtures.wideLimits()),
-                SweepEventListener.NONE, rig::cancelRequested, journal);
+        SweepResult result = new SweepEngine(rig).run(plan(SweepFixtures.wideLimits()), SweepEventListener.NONE,
+                rig.control, journal);
 
         assertEquals(SweepStatus.CANCELLED, result.status());
         assertFalse(rig.exciter().isOutputEnabled(), "output off after a cancel");
@@ -87,26 +86,28 @@ class AdaptiveSweepSafetyTest {
     }
 
     @Test
-    void aLinkFaultMidStepRampsDownSwitchesOffAndIsJournaled() {
+    void aLinkFaultMidStepSwitchesOffAtOnceAndIsJournaled() {
         RecordingRig rig = new RecordingRig(new SimulatedRig(SweepFixtures.singlePolarisationWire()));
         rig.readsBeforeLinkFault = 25;
         RecordingJournal journal = new RecordingJournal();
-        AdaptiveSweepResult result = new AdaptiveSweepRunner(rig).run(plan(SweepFixtures.wideLimits()),
-                SweepEventListener.NONE, () -> false, journal);
+        SweepResult result = new SweepEngine(rig).run(plan(SweepFixtures.wideLimits()), SweepEventListener.NONE,
+                SweepControl.none(), journal);
 
         assertEquals(SweepStatus.FAULT, result.status());
-        assertEquals("fault: link lost: the rig stopped answering", result.reason());
+        assertEquals("link lost: the rig stopped answering", result.reason());
         assertFalse(rig.exciter().isOutputEnabled(), "output off after a fault");
-        assertRampedDownThenOff(rig);
+        List<RecordingRig.Command> c = rig.commands;
+        assertEquals("off", c.get(c.size() - 1).kind(), "the output is switched off");
+        assertFalse(c.get(c.size() - 2).kind().equals("ramp") && c.get(c.size() - 2).amplitudeV() == 0.0,
+                "at once: the link may be what failed, so no ramp is commanded over it");
         assertEquals(List.of(SweepStatus.FAULT), journal.endings);
         assertEquals(result.passes().get(0).points().size(), journal.steps.size());
     }
 
     @Test
     void aDriveLevelAboveTheDriveLimitIsRefusedBeforeAnyExcitation() {
-        RigException e = assertThrows(RigException.class, () -> new AdaptiveSweepPlan(200, 260, LevelMode.DRIVE,
-                List.of(3.0), 2e-5, 0.02, new SafetyLimits(2.0, 4, 9e-4, 9e-4), SweepDirection.UP, 600, 9, 0.002, 0.01,
-                64, 0.0, 0.01, 1.0, 20.0, RAMP_S, 1));
+        RigException e = assertThrows(RigException.class, () -> SweepFixtures.adaptive(200, 260, LevelMode.DRIVE, 3.0,
+                new SafetyLimits(2.0, 4, 9e-4, 9e-4), 9, 1.0, RAMP_S));
         assertEquals("sweep plan: drive level 3.0 V is above limits.driveV 2.0 V", e.getMessage());
     }
 

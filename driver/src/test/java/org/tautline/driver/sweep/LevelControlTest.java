@@ -16,19 +16,18 @@ import org.tautline.driver.sim.SimulatedRig;
  * stated (from memory); the issue's criterion is every step within 2 % of the target force.
  */
 class LevelControlTest {
-    private static AdaptiveSweepPlan plan(double targetN, double driveLimitV) {
-        return new AdaptiveSweepPlan(215, 245, LevelMode.FORCE, List.of(targetN), 2e-5, 0.02,
-                new SafetyLimits(driveLimitV, 4, 9e-4, 9e-4), SweepDirection.UP, 600, 9, 0.002, 0.01, 64, 0.0, 0.01,
-                0.2, 20.0, 0.1, 1);
+    private static SweepPlan plan(double targetN, double driveLimitV) {
+        return SweepFixtures.adaptive(215, 245, LevelMode.FORCE, targetN, new SafetyLimits(driveLimitV, 4, 9e-4, 9e-4), 9,
+                0.2, 0.1);
     }
 
     @Test
     void holdsTheTargetForceWithinTwoPercentAcrossTheResonance() {
         double targetN = 0.005;
-        AdaptiveSweepResult result = new AdaptiveSweepRunner(new SimulatedRig(SweepFixtures.singlePolarisationWire())).run(
-                plan(targetN, 5.0), SweepEventListener.NONE, () -> false, SweepJournal.NONE);
+        SweepResult result = new SweepEngine(new SimulatedRig(SweepFixtures.singlePolarisationWire())).run(
+                plan(targetN, 5.0), SweepEventListener.NONE, SweepControl.none(), SweepJournal.NONE);
         assertEquals(SweepStatus.COMPLETED, result.status(), result.reason());
-        AdaptivePass pass = result.passes().get(0);
+        SweepPass pass = result.passes().get(0);
         double minForcePerVolt = Double.POSITIVE_INFINITY;
         double maxForcePerVolt = 0;
         for (SweepPoint p : pass.points()) {
@@ -46,9 +45,9 @@ class LevelControlTest {
     @Test
     void warnsWhereTheDriveLimitCannotReachTheLevel() {
         double targetN = 0.005;
-        AdaptiveSweepResult result = new AdaptiveSweepRunner(new SimulatedRig(SweepFixtures.singlePolarisationWire())).run(
-                plan(targetN, 2.0), SweepEventListener.NONE, () -> false, SweepJournal.NONE);
-        AdaptivePass pass = result.passes().get(0);
+        SweepResult result = new SweepEngine(new SimulatedRig(SweepFixtures.singlePolarisationWire())).run(
+                plan(targetN, 2.0), SweepEventListener.NONE, SweepControl.none(), SweepJournal.NONE);
+        SweepPass pass = result.passes().get(0);
         assertTrue(pass.warnings().stream().anyMatch(w -> w.startsWith("force level not reached at 2")
                 && w.endsWith("with the drive at its limit 2.0 V")), pass.warnings().toString());
         for (SweepPoint p : pass.points()) {

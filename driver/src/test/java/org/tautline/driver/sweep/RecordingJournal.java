@@ -3,6 +3,8 @@ package org.tautline.driver.sweep;
 import java.util.ArrayList;
 import java.util.List;
 
+import org.tautline.driver.spi.SampleBlock;
+
 /** A journal that keeps what it is told, in memory. */
 final class RecordingJournal implements SweepJournal {
     final List<CompletedStep> steps = new ArrayList<>();
@@ -10,7 +12,7 @@ final class RecordingJournal implements SweepJournal {
     final List<String> reasons = new ArrayList<>();
 
     @Override
-    public void stepCompleted(CompletedStep step) {
+    public void stepCompleted(CompletedStep step, SampleBlock samples) {
         steps.add(step);
     }
 

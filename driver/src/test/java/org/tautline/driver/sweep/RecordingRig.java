@@ -28,9 +28,8 @@ final class RecordingRig implements Rig {
         this.inner = inner;
     }
 
-    boolean cancelRequested() {
-        return blockPeaks.size() >= readsBeforeCancel;
-    }
+    /** Asks for a stop once {@link #readsBeforeCancel} blocks have been read. */
+    final org.tautline.driver.sweep.SweepControl control = new org.tautline.driver.sweep.SweepControl();
 
     @Override
     public String identity() {
@@ -71,6 +70,9 @@ final class RecordingRig implements Rig {
                 }
                 SampleBlock b = super.read(n);
                 blockPeaks.add(new double[] {peak(b.samples()[0]), peak(b.samples()[1]), frequencyHz});
+                if (blockPeaks.size() >= readsBeforeCancel) {
+                    control.requestStop("cancelled by the test");
+                }
                 return b;
             }
         };
