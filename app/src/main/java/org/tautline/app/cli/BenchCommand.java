@@ -182,15 +182,16 @@ final class BenchCommand implements Runnable {
 
     /** {@code tautline bench serial}: block decoding speed and streaming over a pseudo-terminal. */
     @Command(name = "serial", mixinStandardHelpOptions = true,
-            description = "Decode throughput of the serial block decoder (MB/s, target >= 50), then stream the virtual"
-                    + " rig over a socat pseudo-terminal and count blocks received, lost blocks (target 0) and the"
-                    + " longest stall between blocks.")
+            description = "Decode throughput of the serial block decoder (MB/s, target >= 50), then the virtual rig"
+                    + " over a socat pseudo-terminal paced like a UART at the baud rate (10 bits per byte): streaming"
+                    + " (blocks received, lost on the link (target 0), dropped by the device because the line is too"
+                    + " slow, longest stall) and fetching, each as bytes/s and %% of the line's capacity.")
     static final class Serial implements Callable<Integer> {
         @Spec
         private CommandSpec spec;
 
         @Option(names = "--seconds", paramLabel = "S", defaultValue = "60",
-                description = "How long to stream over the pty (default: ${DEFAULT-VALUE}).")
+                description = "How long to use the pty, half streaming, half fetching (default: ${DEFAULT-VALUE}).")
         private double seconds;
 
         @Option(names = "--baud", paramLabel = "B", defaultValue = "921600",
@@ -207,9 +208,14 @@ final class BenchCommand implements Runnable {
                 spec.commandLine().getOut().println(ResultJson.MAPPER.writeValueAsString(f));
             } else {
                 spec.commandLine().getOut().printf(Locale.ROOT,
-                        "serial: decode %.0f MB/s; %.0f s over a pty at %d baud: %d blocks, %d lost, longest stall %.0f ms%n",
-                        f.decodeMegabytesPerS(), f.linkSeconds(), f.baud(), f.blocksReceived(), f.lostBlocks(),
-                        f.longestStallMs());
+                        "serial: decode %.0f MB/s; line %d baud carries %.0f B/s, 2 ch x F32 at the sample rate needs %.0f B/s%n"
+                                + "  stream %.0f s: %.0f B/s = %.1f %% of capacity; %d blocks, %d lost, %d dropped by the"
+                                + " device, longest stall %.0f ms%n"
+                                + "  fetch %.0f s: %.0f B/s = %.1f %% of capacity; %.2f x real time%n",
+                        f.decodeMegabytesPerS(), f.baud(), f.capacityBytesPerS(), f.neededBytesPerS(), f.streamSeconds(),
+                        f.streamBytesPerS(), f.streamCapacityPercent(), f.blocksReceived(), f.lostBlocks(),
+                        f.overrunBlocks(), f.longestStallMs(), f.fetchSeconds(), f.fetchBytesPerS(),
+                        f.fetchCapacityPercent(), f.fetchRealTimeMultiple());
             }
             spec.commandLine().getOut().flush();
             return 0;

@@ -1,6 +1,7 @@
 package org.tautline.app.cli;
 
 import java.io.PrintWriter;
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -11,7 +12,9 @@ import java.util.concurrent.ScheduledExecutorService;
 import java.util.concurrent.TimeUnit;
 
 import org.tautline.analysis.AnalysisException;
+import org.tautline.driver.serial.InjectedFault;
 import org.tautline.driver.serial.VirtualRigServer;
+import org.tautline.driver.serial.VirtualRigSettings;
 import org.tautline.driver.sim.SimulationConfigs;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -20,13 +23,22 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code tautline virtual-rig}: the simulated rig served through the serial protocol on a pseudo-terminal. */
 @Command(name = "virtual-rig", mixinStandardHelpOptions = true,
-        description = "Make a pseudo-terminal pair with socat, serve the simulated demo wire on one end through the"
+        description = {"Make a pseudo-terminal pair with socat, serve the simulated demo wire on one end through the"
                 + " serial protocol (driver/PROTOCOL.md), and print the other end's path for"
-                + " 'tautline sweep --rig serial:PATH'. Runs until interrupted (Ctrl-C).")
+                + " 'tautline sweep --rig serial:PATH'. Runs until interrupted (Ctrl-C).",
+                "",
+                "The log (--log FILE) has one line per event: the wall-clock time in microseconds since 1970-01-01"
+                        + " UTC, a kind and a text, for example '1764812345123456 recv DRIVE:OUT OFF'. Kinds: recv (a"
+                        + " command line as received), notice (a line starting with ! as sent), output (on or off and"
+                        + " the cause), fault (an injected fault), event (anything else)."})
 final class VirtualRigCommand implements Callable<Integer> {
-    /** The fault switches, by the name --fault takes. */
-    static final List<String> FAULTS = List.of("drop-bytes", "corrupt-block", "lose-block", "stall", "reset",
-            "amplifier-fault", "disappear");
+    /** The faults --fault takes. */
+    static final List<String> FAULTS = List.of("drop-bytes", "corrupt-block", "lose-block", "short-stall", "stall",
+            "reset", "amplifier-fault", "disappear");
+    /** How long a short stall lasts, ms: shorter than the serial rig's reply timeout, so the link recovers. */
+    static final int SHORT_STALL_MS = 200;
+    /** How long a stall lasts, ms: longer than the serial rig's default reply timeout (2000 ms), a fault. */
+    static final int STALL_MS = 3000;
 
     @Spec
     private CommandSpec spec;
@@ -34,9 +46,17 @@ final class VirtualRigCommand implements Callable<Integer> {
     @Option(names = "--baud", paramLabel = "B", defaultValue = "921600", description = "Line speed (default: ${DEFAULT-VALUE}).")
     private int baud;
 
+    @Option(names = "--pace", description = "Send no faster than a UART at the baud rate would (10 bits per byte);"
+            + " a pseudo-terminal alone is much faster.")
+    private boolean pace;
+
+    @Option(names = "--log", paramLabel = "FILE", description = "Also write the event log to FILE (see above).")
+    private Path logFile;
+
     @Option(names = "--fault", paramLabel = "KIND@S",
-            description = "Inject a fault S seconds after start: drop-bytes, corrupt-block, lose-block, stall (2 s),"
-                    + " reset, amplifier-fault or disappear. Repeatable.")
+            description = "Inject a fault S seconds after start: drop-bytes (7 bytes of the next block), corrupt-block,"
+                    + " lose-block, short-stall (" + SHORT_STALL_MS + " ms), stall (" + STALL_MS + " ms), reset,"
+                    + " amplifier-fault or disappear. Repeatable.")
     private List<String> faults = new ArrayList<>();
 
     @Override
@@ -57,11 +77,13 @@ final class VirtualRigCommand implements Callable<Integer> {
             delays.add(seconds);
         }
         PrintWriter out = spec.commandLine().getOut();
-        try (VirtualRigServer server = VirtualRigServer.startOnPty(SimulationConfigs.demoWire(), baud)) {
+        VirtualRigSettings settings = VirtualRigSettings.of(baud).withPacing(pace).withLogFile(logFile);
+        try (VirtualRigServer server = VirtualRigServer.startOnPty(SimulationConfigs.demoWire(), settings)) {
             out.println(server.hostPath());
             out.flush();
-            System.err.println("tautline: serving the simulated demo wire on " + server.devicePath() + "; open "
-                    + server.hostPath() + " (for example: tautline sweep --rig serial:" + server.hostPath()
+            System.err.println("tautline: serving the simulated demo wire on " + server.devicePath() + (pace
+                    ? " paced at " + baud + " baud" : "") + (logFile == null ? "" : ", logging to " + logFile)
+                    + "; open " + server.hostPath() + " (for example: tautline sweep --rig serial:" + server.hostPath()
                     + " ...); Ctrl-C stops");
             ScheduledExecutorService timer = Executors.newSingleThreadScheduledExecutor(r -> {
                 Thread t = new Thread(r, "virtual-rig-faults");
@@ -84,27 +106,15 @@ final class VirtualRigCommand implements Callable<Integer> {
     static void inject(VirtualRigServer server, String kind) {
         System.err.println(String.format(Locale.ROOT, "tautline: virtual rig: injecting %s", kind));
         switch (kind) {
-            case "drop-bytes":
-                server.dropBytes(7);
-                break;
-            case "corrupt-block":
-                server.corruptBlock(1);
-                break;
-            case "lose-block":
-                server.loseBlock(1);
-                break;
-            case "stall":
-                server.stall(2000);
-                break;
-            case "reset":
-                server.reset();
-                break;
-            case "amplifier-fault":
-                server.amplifierFault();
-                break;
-            default:
-                server.disappear();
-                break;
+            case "short-stall" -> server.inject(InjectedFault.STALL, SHORT_STALL_MS);
+            case "stall" -> server.inject(InjectedFault.STALL, STALL_MS);
+            default -> {
+                for (InjectedFault f : InjectedFault.values()) {
+                    if (f.label().equals(kind)) {
+                        server.inject(f, f.defaultParameter());
+                    }
+                }
+            }
         }
     }
 }

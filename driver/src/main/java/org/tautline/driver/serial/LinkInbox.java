@@ -8,18 +8,22 @@ import org.tautline.driver.RigLinkException;
 import org.tautline.driver.RigLinkException.Kind;
 
 /**
- * What the host has received: reply lines, data blocks and CRC faults in arrival order, and any fault
- * that ends the link (port gone, device reset notice, device watchdog notice).
+ * What the host has received: one queue of {@link LinkEvent}s in arrival order, and the notice or port fault
+ * that ends the link.
  *
- * <p>Fed by the transport's reader thread; read by the thread using the rig.
+ * <p>Fed by the transport's reader thread; read by the thread using the rig. A notice ({@code !RESET},
+ * {@code !FAULT}) or a lost port becomes the {@link #linkFault()} at once, so a read in progress sees it within
+ * its next poll. Status lines are checked here ({@link DeviceStatus#parse}); one that fails its check is
+ * {@link LinkEvent.Garbled}, never a status.
  */
 final class LinkInbox implements StreamDecoder.Sink, SerialTransport.Receiver {
     private final String port;
     private final StreamDecoder decoder;
-    private final LinkedBlockingQueue<String> lines = new LinkedBlockingQueue<>();
-    private final LinkedBlockingQueue<Object> blockEvents = new LinkedBlockingQueue<>();
+    private final LinkedBlockingQueue<LinkEvent> events = new LinkedBlockingQueue<>();
     private volatile RigLinkException linkFault;
+    private volatile long lastByteNanos = System.nanoTime();
     private final AtomicLong strayFaults = new AtomicLong();
+    private final AtomicLong bytesReceived = new AtomicLong();
 
     LinkInbox(String port) {
         this.port = port;
@@ -28,6 +32,8 @@ final class LinkInbox implements StreamDecoder.Sink, SerialTransport.Receiver {
 
     @Override
     public void bytes(byte[] data, int offset, int length) {
+        lastByteNanos = System.nanoTime();
+        bytesReceived.addAndGet(length);
         synchronized (decoder) {
             decoder.feed(data, offset, length);
         }
@@ -43,27 +49,38 @@ final class LinkInbox implements StreamDecoder.Sink, SerialTransport.Receiver {
     @Override
     public void line(String line) {
         if (line.startsWith("!RESET")) {
-            linkFault = new RigLinkException(Kind.DEVICE_RESET, port, "the device announced a reset ('" + line
-                    + "') and has forgotten its state", "no reset during a session; reconnect to go on");
-        } else if (line.startsWith("!WDOG")) {
-            linkFault = new RigLinkException(Kind.DEVICE_ERROR, port, "the device's watchdog switched the output"
-                    + " off ('" + line + "')", "a command within the watchdog time");
+            gone(new RigLinkException(Kind.DEVICE_RESET, port, "the device announced a reset ('" + line
+                    + "') and has forgotten its state", "no reset during a session; reconnect to go on"));
+        } else if (line.startsWith("!FAULT")) {
+            DeviceError e = DeviceError.parse(line.substring(6).strip());
+            gone(new RigLinkException(Kind.DEVICE_ERROR, port, "the device switched its output off by itself ("
+                    + (e == null ? "notice '" + line + "'" : e.message() + ", fault " + e.code()) + ")",
+                    "no device fault during a session; check the amplifier and the rig, then reconnect"));
+        } else if (line.startsWith(DeviceStatus.PREFIX)) {
+            DeviceStatus s = DeviceStatus.parse(line);
+            if (s == null) {
+                strayFaults.incrementAndGet();
+                events.add(new LinkEvent.Garbled("a status line failed its check: " + line));
+            } else {
+                events.add(new LinkEvent.Status(s));
+            }
         } else {
-            lines.add(line);
+            events.add(new LinkEvent.Reply(line));
         }
     }
 
     @Override
     public void block(DataBlock block) {
-        blockEvents.add(block);
+        events.add(new LinkEvent.Block(block));
     }
 
     @Override
     public void fault(RigLinkException fault) {
         if (fault.kind() == Kind.CRC) {
-            blockEvents.add(fault);
+            events.add(new LinkEvent.Damaged(fault));
         } else {
             strayFaults.incrementAndGet();
+            events.add(new LinkEvent.Garbled(fault.getMessage()));
         }
     }
 
@@ -74,40 +91,44 @@ final class LinkInbox implements StreamDecoder.Sink, SerialTransport.Receiver {
         }
     }
 
-    /** Gives up on a partly received block so that what follows it can be decoded. */
+    /** Gives up on a partly received block so that what follows its {@code '#'} can be decoded. */
     void abandonPending() {
         synchronized (decoder) {
             decoder.abandonPending();
         }
     }
 
-    /** @return the fault that ended the link, or null */
+    /** @return the notice or port fault that ended the link, or null */
     RigLinkException linkFault() {
         return linkFault;
     }
 
-    /** Forgets reply lines nobody waited for. */
-    void clearLines() {
-        lines.clear();
+    /** @return {@link System#nanoTime()} when the last byte arrived (or when the inbox was made) */
+    long lastByteNanos() {
+        return lastByteNanos;
     }
 
-    /** @param ms longest wait @return the next reply line, or null */
-    String pollLine(long ms) throws InterruptedException {
-        return lines.poll(ms, TimeUnit.MILLISECONDS);
+    /** Forgets every event nobody waited for. */
+    void clear() {
+        events.clear();
     }
 
-    /** @param ms longest wait @return the next {@link DataBlock} or CRC {@link RigLinkException}, or null */
-    Object pollBlockEvent(long ms) throws InterruptedException {
-        return blockEvents.poll(ms, TimeUnit.MILLISECONDS);
+    /**
+     * @param ms longest wait, ms
+     * @return the next event, or null
+     * @throws InterruptedException when the waiting thread is interrupted
+     */
+    LinkEvent poll(long ms) throws InterruptedException {
+        return events.poll(ms, TimeUnit.MILLISECONDS);
     }
 
-    /** Forgets blocks and CRC faults nobody waited for. */
-    void clearBlocks() {
-        blockEvents.clear();
-    }
-
-    /** @return stray or unreadable bytes reported by the decoder */
+    /** @return unreadable lines and stray bytes seen so far, as counted fault events */
     long strayFaults() {
         return strayFaults.get();
+    }
+
+    /** @return bytes received so far */
+    long bytesReceived() {
+        return bytesReceived.get();
     }
 }

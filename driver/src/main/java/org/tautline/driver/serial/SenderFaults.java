@@ -1,12 +1,15 @@
 package org.tautline.driver.serial;
 
 import java.nio.charset.StandardCharsets;
+import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.EnumMap;
 import java.util.List;
+import java.util.Map;
 import java.util.function.Consumer;
 
-/** The virtual rig's fault switches, applied to what it sends; thread-safe. */
+/** The virtual rig's fault switches and fault schedule, applied to what it sends; thread-safe. */
 final class SenderFaults {
     /** The line a garbled reply becomes. */
     static final String GARBLED = "~~garbled~~";
@@ -20,6 +23,10 @@ final class SenderFaults {
     private byte[] garbage;
     private long stallUntilNs;
     private boolean stalled;
+    private final ArrayDeque<FaultSchedule.Entry> scheduled = new ArrayDeque<>();
+    private int scheduledCorrupt;
+    private int scheduledLose;
+    private final Map<InjectedFault, Long> applied = new EnumMap<>(InjectedFault.class);
 
     synchronized void dropBytes(int count) {
         dropBytes = count;
@@ -33,12 +40,6 @@ final class SenderFaults {
     synchronized void loseBlock(int times) {
         loseTimes = times;
         loseSequence = -1;
-    }
-
-    /** Reads the sequence number from an encoded block. */
-    private static long sequenceOf(byte[] block) {
-        int h = 2 + (block[1] - '0');
-        return Integer.toUnsignedLong((int) BlockCodec.I32.get(block, h + 4));
     }
 
     synchronized void garbleNextReply() {
@@ -55,26 +56,87 @@ final class SenderFaults {
     }
 
     /**
-     * Waits out any stall, then applies the switches to one item.
+     * @param schedule faults to add
+     * @param itemsSent items sent so far: the schedule's moments count from here
+     */
+    synchronized void schedule(FaultSchedule schedule, long itemsSent) {
+        List<FaultSchedule.Entry> all = new ArrayList<>(scheduled);
+        for (FaultSchedule.Entry e : schedule.entries()) {
+            all.add(new FaultSchedule.Entry(e.item() + itemsSent, e.fault(), e.parameter()));
+        }
+        scheduled.clear();
+        scheduled.addAll(new FaultSchedule(all).entries());
+    }
+
+    /** @param fault a kind that was just applied */
+    synchronized void count(InjectedFault fault) {
+        applied.merge(fault, 1L, Long::sum);
+    }
+
+    /** @return how many faults of a kind were applied so far */
+    synchronized long applied(InjectedFault fault) {
+        return applied.getOrDefault(fault, 0L);
+    }
+
+    /** @return scheduled faults not yet applied */
+    synchronized int pending() {
+        return scheduled.size() + scheduledCorrupt + scheduledLose;
+    }
+
+    /**
+     * Takes the scheduled faults due at an item that do not change an item (stall, reset...), and notes those that do.
      *
-     * @param item a reply line or a data block, as the device would send it
+     * @param item the number of the item about to be taken
+     * @return the faults to apply before taking it, in order
+     */
+    synchronized List<FaultSchedule.Entry> due(long item) {
+        List<FaultSchedule.Entry> out = new ArrayList<>();
+        while (!scheduled.isEmpty() && scheduled.peek().item() <= item) {
+            FaultSchedule.Entry e = scheduled.poll();
+            switch (e.fault()) {
+                case DROP_BYTES -> dropBytes += e.parameter();
+                case CORRUPT_BLOCK -> scheduledCorrupt++;
+                case LOSE_BLOCK -> scheduledLose++;
+                default -> out.add(e);
+            }
+        }
+        return out;
+    }
+
+    /** Reads the sequence number from an encoded block. */
+    private static long sequenceOf(byte[] block) {
+        int h = 2 + (block[1] - '0');
+        return Integer.toUnsignedLong((int) BlockCodec.I32.get(block, h + 4));
+    }
+
+    /**
+     * Applies the switches and the faults due to one item.
+     *
+     * @param item a line or a data block, as the device would send it
      * @param log where to note each applied fault
      * @return what to write, in order (possibly nothing)
-     * @throws InterruptedException when the server closes during a stall
      */
-    List<byte[]> apply(byte[] item, Consumer<String> log) throws InterruptedException {
-        waitOutStall();
+    List<byte[]> apply(byte[] item, Consumer<String> log) {
         List<byte[]> out = new ArrayList<>(2);
         synchronized (this) {
             boolean block = item.length > 0 && item[0] == '#';
             if (!block) {
+                byte[] b = item;
                 if (garbleNextReply && item.length > 0 && item[0] != '!') {
                     garbleNextReply = false;
                     log.accept("garbled reply " + new String(item, StandardCharsets.US_ASCII).strip());
-                    out.add((GARBLED + "\n").getBytes(StandardCharsets.US_ASCII));
-                } else {
-                    out.add(item);
+                    b = (GARBLED + "\n").getBytes(StandardCharsets.US_ASCII);
                 }
+                if (dropBytes > 0 && b.length > 1) {
+                    int cut = Math.min(dropBytes, b.length - 1);
+                    int at = cutPosition(b.length - 1 - cut);
+                    b = cut(b, at, cut);
+                    dropBytes = 0;
+                    count(InjectedFault.DROP_BYTES);
+                    log.accept("drop-bytes " + cut + " from the line '" + new String(item, StandardCharsets.US_ASCII)
+                            .strip() + "'");
+                }
+                out.add(b);
                 return out;
             }
             if (garbage != null) {
@@ -83,47 +145,78 @@ final class SenderFaults {
                 garbage = null;
             }
             long sequence = sequenceOf(item);
-            if (loseTimes > 0 && (loseSequence < 0 || loseSequence == sequence)) {
-                loseSequence = sequence;
-                loseTimes--;
-                log.accept("lost block " + sequence);
+            if (scheduledLose > 0 || loseTimes > 0 && (loseSequence < 0 || loseSequence == sequence)) {
+                if (scheduledLose > 0) {
+                    scheduledLose--;
+                } else {
+                    loseSequence = sequence;
+                    loseTimes--;
+                }
+                count(InjectedFault.LOSE_BLOCK);
+                log.accept("lose-block " + sequence);
                 return out;
             }
             byte[] b = item;
-            if (corruptTimes > 0 && (corruptSequence < 0 || corruptSequence == sequence)) {
-                corruptSequence = sequence;
-                corruptTimes--;
+            if (scheduledCorrupt > 0 || corruptTimes > 0 && (corruptSequence < 0 || corruptSequence == sequence)) {
+                if (scheduledCorrupt > 0) {
+                    scheduledCorrupt--;
+                } else {
+                    corruptSequence = sequence;
+                    corruptTimes--;
+                }
                 b = item.clone();
                 b[b.length / 2] ^= 0x10;
-                log.accept("corrupted block " + sequence + " at byte " + b.length / 2);
+                count(InjectedFault.CORRUPT_BLOCK);
+                log.accept("corrupt-block " + sequence + " at byte " + b.length / 2);
             }
             if (dropBytes > 0) {
-                int cut = Math.min(dropBytes, b.length / 4);
-                int at = b.length / 2;
-                byte[] shorter = Arrays.copyOf(b, b.length - cut);
-                System.arraycopy(b, at + cut, shorter, at, b.length - at - cut);
-                b = shorter;
+                int cut = Math.max(1, Math.min(dropBytes, b.length / 4));
+                b = cut(b, cutPosition(b.length - cut), cut);
                 dropBytes = 0;
-                log.accept("dropped " + cut + " bytes from a block");
+                count(InjectedFault.DROP_BYTES);
+                log.accept("drop-bytes " + cut + " from block " + sequence);
             }
             out.add(b);
             return out;
         }
     }
 
-    private void waitOutStall() throws InterruptedException {
+    /**
+     * Where the next cut starts: the first cut takes an item's first bytes, later ones move through the item in steps
+     * of 7919 bytes (a prime), so that cuts land in headers, samples, terminators and the heads of lines alike.
+     */
+    private int cutPosition(int room) {
+        long k = applied(InjectedFault.DROP_BYTES);
+        return room <= 0 ? 0 : (int) (k * 7919 % (room + 1));
+    }
+
+    private static byte[] cut(byte[] b, int at, int count) {
+        byte[] shorter = Arrays.copyOf(b, b.length - count);
+        System.arraycopy(b, at + count, shorter, at, b.length - at - count);
+        return shorter;
+    }
+
+    /**
+     * Waits until no stall is in force.
+     *
+     * @return true when a stall was waited out
+     * @throws InterruptedException when the server closes during a stall
+     */
+    boolean waitOutStall() throws InterruptedException {
+        boolean waited = false;
         while (true) {
             long waitNs;
             synchronized (this) {
                 if (!stalled) {
-                    return;
+                    return waited;
                 }
                 waitNs = stallUntilNs - System.nanoTime();
                 if (waitNs <= 0) {
                     stalled = false;
-                    return;
+                    return true;
                 }
             }
+            waited = true;
             Thread.sleep(Math.max(1, Math.min(20, waitNs / 1_000_000L)));
         }
     }

@@ -3,6 +3,7 @@ package org.tautline.driver.serial;
 import java.util.ArrayList;
 import java.util.List;
 
+import org.tautline.driver.RigDataLostException;
 import org.tautline.driver.RigException;
 import org.tautline.driver.RigLinkException;
 import org.tautline.driver.RigLinkException.Kind;
@@ -13,20 +14,23 @@ import org.tautline.driver.spi.Rig;
 import org.tautline.driver.spi.SampleBlock;
 
 /**
- * A rig on a serial port speaking PROTOCOL.md.
+ * A rig on a serial port speaking PROTOCOL.md (version 2).
  *
- * <p>Opening switches the output off, reads the identity ({@code *IDN?}), agrees a protocol version
- * ({@code LINK:PROT?}, {@code LINK:PROT}), sets the watchdog, format and block size and reads the channels.
- * Reads are {@code ACQ:FETCH?} requests assembled from sequence-numbered blocks; a damaged or missing block
- * is re-requested once. On any link fault the rig commands the output off at once (best effort, waiting at
- * most {@value #OFF_CONFIRM_MS} ms for confirmation), records the fault ({@link #fault()}), and throws it;
- * every later call but switching off and closing throws too. Methods are synchronised.
+ * <p>Opening switches the output off, reads the identity, agrees a protocol version, sets the watchdog, format
+ * and block size, reads the channels (each value twice, see {@link CommandLink#stableQuery}) and takes the boot
+ * counter, sample index and sequence number from a checked status. Every drive command is followed by a status
+ * ({@code LINK:STAT?}) that must show the same boot counter and an empty error queue. Reads are described in
+ * {@link FetchRead}: they return verified, contiguous samples, or throw {@link RigDataLostException} (samples lost,
+ * link healthy, measure again) or a {@link RigLinkException} (a fault: the output has been commanded off, at once,
+ * waiting at most {@value #OFF_CONFIRM_MS} ms for confirmation; every later call but switching off and closing
+ * throws too). Methods are synchronised, except {@link Exciter#switchOffNow()} and
+ * {@link Exciter#isOutputEnabled()}, which never wait for a command or read in progress.
  */
 public final class SerialRig implements Rig {
-    /** Protocol versions this host speaks. */
-    static final int HOST_PROTOCOL_MIN = 1;
+    /** Lowest protocol version this host speaks. */
+    static final int HOST_PROTOCOL_MIN = 2;
     /** Highest protocol version this host speaks. */
-    static final int HOST_PROTOCOL_MAX = 1;
+    static final int HOST_PROTOCOL_MAX = 2;
     /** Longest wait for the device to confirm the output is off after a fault, ms. */
     static final int OFF_CONFIRM_MS = 100;
 
@@ -36,36 +40,39 @@ public final class SerialRig implements Rig {
      * @param fault the first link fault
      * @param detectedNanoTime {@link System#nanoTime()} when the host detected it
      * @param offSentNanoTime when {@code DRIVE:OUT OFF} was written, or -1 when the link did not allow it
-     * @param offConfirmed true when the device answered {@code DRIVE:OUT?} with 0 within the bounded wait
+     * @param offConfirmed true when a status showed the output off within the bounded wait
      */
     public record FaultRecord(RigLinkException fault, long detectedNanoTime, long offSentNanoTime,
                               boolean offConfirmed) {
     }
 
     private final SerialLinkSettings settings;
+    private final SerialTransport transport;
     private final LinkInbox inbox;
-    private final BlockAssembler assembler;
     private final CommandLink link;
     private final String port;
+    private final FetchRead.Cursor cursor = new FetchRead.Cursor();
+    private final Object driveGate = new Object();
+    private FetchRead reader;
     private String identity;
     private int protocolVersion;
-    private int bootCount;
+    private long bootCount;
     private double sampleRateHz;
     private double maxAmplitudeV;
     private List<ChannelInfo> channels;
     private double[] sensitivity;
-    private long nextSampleIndex;
-    private long nextSequence;
-    private boolean outputOn;
+    private volatile boolean outputOn;
+    private volatile boolean switchedOffNow;
+    private volatile long switchOffNanoTime = -1;
     private final SerialExciter exciter = new SerialExciter();
     private final SerialAcquisition acquisition = new SerialAcquisition();
 
     private SerialRig(SerialTransport transport, SerialLinkSettings settings) {
         this.settings = settings;
+        this.transport = transport;
         this.port = transport.port();
         this.inbox = new LinkInbox(port);
-        this.assembler = new BlockAssembler(port, inbox);
-        this.link = new CommandLink(transport, inbox, settings.replyTimeoutMs());
+        this.link = new CommandLink(transport, inbox, LinkTiming.of(settings, 2));
     }
 
     /**
@@ -91,7 +98,9 @@ public final class SerialRig implements Rig {
         SerialRig rig = new SerialRig(t, settings);
         t.startReading(rig.inbox);
         try {
-            rig.handshake();
+            synchronized (rig) {
+                rig.handshake();
+            }
             return rig;
         } catch (RuntimeException e) {
             rig.close();
@@ -101,34 +110,39 @@ public final class SerialRig implements Rig {
 
     private void handshake() {
         link.send("DRIVE:OUT OFF");
+        link.send("ACQ:ABORT");
         link.send("ACQ:STREAM OFF");
         link.send("*CLS");
-        String idn = link.query("*IDN?");
+        String idn = link.stableQuery("*IDN?");
         String[] f = idn.split(",", -1);
         if (f.length != 4) {
             throw link.fail(new RigLinkException(Kind.PROTOCOL, port, "*IDN? answered '" + idn + "'",
                     "four comma-separated fields: maker,model,serial,firmware"));
         }
         identity = f[0].strip() + " " + f[1].strip() + ", serial " + f[2].strip() + ", firmware " + f[3].strip();
-        long[] range = link.numbers(link.query("LINK:PROT?"), "LINK:PROT?", 2);
+        long[] range = link.numbers(link.stableQuery("LINK:PROT?"), "LINK:PROT?", 2);
         long version = Math.min(range[1], HOST_PROTOCOL_MAX);
         if (version < Math.max(range[0], HOST_PROTOCOL_MIN)) {
-            throw link.fail(new RigLinkException(Kind.PROTOCOL, port, "the device speaks protocol versions " + range[0] + ".."
-                    + range[1], "a version in " + HOST_PROTOCOL_MIN + ".." + HOST_PROTOCOL_MAX + "; update the host or firmware"));
+            throw link.fail(new RigLinkException(Kind.PROTOCOL, port, "the device speaks protocol versions " + range[0]
+                    + ".." + range[1], "a version in " + HOST_PROTOCOL_MIN + ".." + HOST_PROTOCOL_MAX
+                    + "; update the host or firmware"));
         }
         protocolVersion = (int) version;
         link.send("LINK:PROT " + protocolVersion);
-        bootCount = (int) link.numbers(link.query("LINK:BOOT?"), "LINK:BOOT?", 1)[0];
         link.send("LINK:WDOG " + settings.watchdogMs());
         link.send("ACQ:FORM " + settings.format().mnemonic());
         link.send("ACQ:BLOCK " + settings.blockSamples());
-        sampleRateHz = link.decimal(link.query("ACQ:RATE?"), "ACQ:RATE?");
-        maxAmplitudeV = link.decimal(link.query("DRIVE:MAX?"), "DRIVE:MAX?");
-        int count = (int) link.numbers(link.query("ACQ:CHAN:COUNT?"), "ACQ:CHAN:COUNT?", 1)[0];
+        sampleRateHz = link.decimal(link.stableQuery("ACQ:RATE?"), "ACQ:RATE?");
+        maxAmplitudeV = link.decimal(link.stableQuery("DRIVE:MAX?"), "DRIVE:MAX?");
+        int count = (int) link.numbers(link.stableQuery("ACQ:CHAN:COUNT?"), "ACQ:CHAN:COUNT?", 1)[0];
+        if (count < 1 || count > BlockCodec.MAX_CHANNELS) {
+            throw link.fail(new RigLinkException(Kind.PROTOCOL, port, "ACQ:CHAN:COUNT? answered " + count,
+                    "1.." + BlockCodec.MAX_CHANNELS + " channels"));
+        }
         List<ChannelInfo> list = new ArrayList<>();
         sensitivity = new double[count];
         for (int i = 0; i < count; i++) {
-            String c = link.query("ACQ:CHAN? " + i);
+            String c = link.stableQuery("ACQ:CHAN? " + i);
             String[] p = c.split(",", -1);
             if (p.length != 4) {
                 throw link.fail(new RigLinkException(Kind.PROTOCOL, port, "ACQ:CHAN? " + i + " answered '" + c + "'",
@@ -139,9 +153,14 @@ public final class SerialRig implements Rig {
         }
         channels = List.copyOf(list);
         inbox.sensitivity(sensitivity);
-        nextSampleIndex = link.numbers(link.query("ACQ:NEXT?"), "ACQ:NEXT?", 1)[0];
-        nextSequence = link.numbers(link.query("ACQ:SEQ?"), "ACQ:SEQ?", 1)[0];
-        link.checkErrors("setting up the link");
+        link.timing(LinkTiming.of(settings, count));
+        DeviceStatus s = link.status("while setting up the link");
+        link.verify(s, false, "after setting up the link");
+        bootCount = s.bootCount();
+        link.bootCount(bootCount);
+        cursor.sequence = s.nextSequence();
+        cursor.sampleIndex = s.nextSample();
+        reader = new FetchRead(link, inbox, cursor, count, settings.blockSamples(), () -> outputOn);
     }
 
     @Override
@@ -164,8 +183,8 @@ public final class SerialRig implements Rig {
         return protocolVersion;
     }
 
-    /** @return the device's boot counter when the rig was opened ({@code LINK:BOOT?}) */
-    public synchronized int bootCount() {
+    /** @return the device's boot counter when the rig was opened */
+    public synchronized long bootCount() {
         return bootCount;
     }
 
@@ -177,24 +196,39 @@ public final class SerialRig implements Rig {
         return sensitivity[channel];
     }
 
+    /** @return the settings the rig was opened with */
+    public SerialLinkSettings settings() {
+        return settings;
+    }
+
     /** @return the first link fault and what was done about it, or null while the link is healthy */
-    public synchronized FaultRecord fault() {
+    public FaultRecord fault() {
         return link.fault();
+    }
+
+    /** @return {@link System#nanoTime()} just after the last {@link Exciter#switchOffNow()} wrote its command, or -1 */
+    public long switchOffNanoTime() {
+        return switchOffNanoTime;
     }
 
     /** @return data blocks accepted so far */
     public synchronized long blocksReceived() {
-        return assembler.received();
+        return reader == null ? 0 : reader.received();
     }
 
     /** @return data blocks recovered by a re-request so far */
     public synchronized long blocksRecovered() {
-        return assembler.recovered();
+        return reader == null ? 0 : reader.recovered();
     }
 
-    /** @return stray or unreadable bytes the decoder skipped, as counted fault events */
+    /** @return stray or unreadable lines and bytes the decoder skipped, as counted fault events */
     public long strayByteEvents() {
         return inbox.strayFaults();
+    }
+
+    /** @return bytes received from the device so far */
+    public long bytesReceived() {
+        return inbox.bytesReceived();
     }
 
     /** Commands the output off (bounded wait), then closes the port; never throws, idempotent. */
@@ -202,6 +236,13 @@ public final class SerialRig implements Rig {
     public synchronized void close() {
         outputOn = false;
         link.close();
+    }
+
+    private void afterDriveCommand(String command) {
+        DeviceStatus s = link.status("after " + command);
+        link.verify(s, outputOn, "after " + command);
+        cursor.sampleIndex = s.nextSample();
+        cursor.sequence = s.nextSequence();
     }
 
     private final class SerialExciter implements Exciter {
@@ -214,11 +255,13 @@ public final class SerialRig implements Rig {
                     throw new RigException("drive frequency must lie between 0 and half the sample rate ("
                             + sampleRateHz / 2 + " Hz) of the rig on " + port + ", got " + frequencyHz + " Hz");
                 }
-                link.send("DRIVE:SINE " + frequencyHz + "," + amplitudeV);
-                link.checkErrors("DRIVE:SINE " + frequencyHz + "," + amplitudeV);
+                String command = "DRIVE:SINE " + frequencyHz + "," + amplitudeV;
+                link.send(command);
+                afterDriveCommand(command);
             }
         }
 
+        /** After {@link #switchOffNow()} and before the output is switched on again, a ramp is not sent: the output is off. */
         @Override
         public void rampTo(double amplitudeV, double durationS) {
             synchronized (SerialRig.this) {
@@ -228,10 +271,12 @@ public final class SerialRig implements Rig {
                     throw new RigException("ramp duration must be zero or a positive finite number of seconds, got "
                             + durationS);
                 }
-                link.send("DRIVE:RAMP " + amplitudeV + "," + durationS);
-                nextSampleIndex = link.numbers(link.query("ACQ:NEXT?", settings.replyTimeoutMs() + Math.round(durationS * 1000)),
-                        "ACQ:NEXT?", 1)[0];
-                link.checkErrors("DRIVE:RAMP " + amplitudeV + "," + durationS);
+                if (switchedOffNow) {
+                    return;
+                }
+                String command = "DRIVE:RAMP " + amplitudeV + "," + durationS;
+                link.send(command);
+                afterDriveCommand(command);
             }
         }
 
@@ -242,7 +287,7 @@ public final class SerialRig implements Rig {
             }
         }
 
-        /** Switching on is checked with the device; switching off is best effort and never throws. */
+        /** Switching on is checked with a status; switching off is confirmed with one and never throws. */
         @Override
         public void setOutputEnabled(boolean enabled) {
             synchronized (SerialRig.this) {
@@ -252,21 +297,72 @@ public final class SerialRig implements Rig {
                     return;
                 }
                 link.requireUsable();
-                link.send("DRIVE:OUT ON");
-                String state = link.query("DRIVE:OUT?");
-                link.checkErrors("DRIVE:OUT ON");
-                if (!state.equals("1")) {
-                    throw link.fail(new RigLinkException(Kind.PROTOCOL, port, "DRIVE:OUT? answered '" + state
-                            + "' after DRIVE:OUT ON", "1"));
+                switchedOffNow = false;
+                RigLinkException writeFault = null;
+                synchronized (driveGate) {
+                    if (switchedOffNow) {
+                        throw stopped();
+                    }
+                    try {
+                        transport.writeLine("DRIVE:OUT ON");
+                    } catch (RigLinkException e) {
+                        writeFault = e;
+                    }
                 }
-                outputOn = true;
+                if (writeFault != null) {
+                    throw link.fail(writeFault);
+                }
+                DeviceStatus s = link.status("after DRIVE:OUT ON");
+                link.verify(s, false, "after DRIVE:OUT ON");
+                synchronized (driveGate) {
+                    if (switchedOffNow) {
+                        throw stopped();
+                    }
+                    if (!s.outputOn()) {
+                        throw link.fail(new RigLinkException(Kind.DEVICE_ERROR, port, "the output stayed off after"
+                                + " DRIVE:OUT ON (" + DeviceStatus.faultText(s.lastFault()) + ")",
+                                "the status to show the output on"));
+                    }
+                    outputOn = true;
+                }
             }
+        }
+
+        private RigException stopped() {
+            return new RigException("the output on " + port + " was switched off by a stop while it was being"
+                    + " switched on; it stays off until it is switched on again");
         }
 
         @Override
         public boolean isOutputEnabled() {
-            synchronized (SerialRig.this) {
-                return outputOn && link.fault() == null;
+            return outputOn && link.fault() == null;
+        }
+
+        /**
+         * Writes {@code DRIVE:OUT OFF} from the calling thread at once, without the rig's lock.
+         *
+         * <p>Only the port's write lock is taken, which a writer holds for one line. A read in progress goes on
+         * (the device keeps acquiring) and returns its samples; later ramps are not sent until the output is
+         * switched on again.
+         *
+         * @return true when the command was written; false when the port is closed or gone (the device's own
+         *         rule then switches its output off)
+         */
+        @Override
+        public boolean switchOffNow() {
+            try {
+                synchronized (driveGate) {
+                    switchedOffNow = true;
+                    outputOn = false;
+                    if (!transport.isOpen()) {
+                        return false;
+                    }
+                    transport.writeLine("DRIVE:OUT OFF");
+                    switchOffNanoTime = System.nanoTime();
+                    return true;
+                }
+            } catch (RuntimeException e) {
+                return false;
             }
         }
 
@@ -293,6 +389,13 @@ public final class SerialRig implements Rig {
             }
         }
 
+        /**
+         * {@inheritDoc}
+         *
+         * @throws RigDataLostException when samples of this read were lost on the link but it is healthy again;
+         *         the next read starts at {@link #nextSampleIndex()}, which has moved past the lost samples
+         * @throws RigLinkException on a fault: reset, device fault, output gone off, port gone, silence
+         */
         @Override
         public SampleBlock read(int sampleCount) {
             synchronized (SerialRig.this) {
@@ -300,62 +403,19 @@ public final class SerialRig implements Rig {
                 if (sampleCount < 1) {
                     throw new RigException("read needs 1 or more samples per channel, got " + sampleCount);
                 }
-                return fetch(sampleCount);
+                if (sampleCount > VirtualDevice.MAX_FETCH_SAMPLES) {
+                    throw new RigException("read takes at most " + VirtualDevice.MAX_FETCH_SAMPLES
+                            + " samples per channel, got " + sampleCount);
+                }
+                return reader.read(sampleCount);
             }
         }
 
         @Override
         public long nextSampleIndex() {
             synchronized (SerialRig.this) {
-                return nextSampleIndex;
+                return cursor.sampleIndex;
             }
-        }
-    }
-
-    private SampleBlock fetch(int n) {
-        long first = nextSampleIndex;
-        assembler.clear();
-        inbox.clearBlocks();
-        link.send("ACQ:FETCH? " + n);
-        double[][] out = null;
-        int filled = 0;
-        try {
-            while (filled < n) {
-                int expected = Math.min(settings.blockSamples(), n - filled);
-                DataBlock b = assembler.await(nextSequence, settings.blockTimeoutMs(),
-                        seq -> link.send("ACQ:RESEND? " + seq));
-                checkBlock(b, expected);
-                nextSequence = (nextSequence + 1) & 0xFFFFFFFFL;
-                nextSampleIndex += expected;
-                if (expected == n) {
-                    return new SampleBlock(first, b.samples());
-                }
-                if (out == null) {
-                    out = new double[channels.size()][n];
-                }
-                for (int c = 0; c < out.length; c++) {
-                    System.arraycopy(b.samples()[c], 0, out[c], filled, expected);
-                }
-                filled += expected;
-            }
-        } catch (RigLinkException e) {
-            throw link.fail(e);
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw link.fail(new RigLinkException(Kind.TIMEOUT, port, "interrupted waiting for data block " + nextSequence,
-                    "the blocks of ACQ:FETCH? " + n, e));
-        }
-        return new SampleBlock(first, out);
-    }
-
-    private void checkBlock(DataBlock b, int expected) {
-        if (b.samples().length != channels.size() || b.sampleCount() != expected) {
-            throw new RigLinkException(Kind.PROTOCOL, port, "data block " + b.sequence() + " has " + b.samples().length
-                    + " channel(s) of " + b.sampleCount() + " samples", channels.size() + " channel(s) of " + expected);
-        }
-        if (b.firstSampleIndex() != nextSampleIndex) {
-            throw new RigLinkException(Kind.SEQUENCE_GAP, port, "data block " + b.sequence() + " starts at sample "
-                    + b.firstSampleIndex(), "sample " + nextSampleIndex + ", the one after the last delivered");
         }
     }
 }

@@ -169,17 +169,29 @@ public final class SerialTransport implements AutoCloseable {
      * @throws RigLinkException of kind {@link Kind#PORT_GONE} when the port is closed, gone or the write fails
      */
     public void write(byte[] data) {
+        write(data, 0, data.length);
+    }
+
+    /**
+     * Writes bytes as one unit: writes from other threads (each one line, for example) never interleave with them.
+     *
+     * @param data the buffer
+     * @param offset first byte
+     * @param length byte count
+     * @throws RigLinkException of kind {@link Kind#PORT_GONE} when the port is closed, gone or the write fails
+     */
+    public void write(byte[] data, int offset, int length) {
         synchronized (writeLock) {
             if (closed || goneReported) {
                 throw new RigLinkException(Kind.PORT_GONE, name, "the port is " + (closed ? "closed" : "gone"),
                         "an open port; open it again");
             }
             int done = 0;
-            while (done < data.length) {
-                int n = port.writeBytes(data, data.length - done, done);
+            while (done < length) {
+                int n = port.writeBytes(data, length - done, offset + done);
                 if (n <= 0) {
                     throw new RigLinkException(Kind.PORT_GONE, name, "writing failed after " + done + " of "
-                            + data.length + " bytes (system error " + port.getLastErrorCode() + ")",
+                            + length + " bytes (system error " + port.getLastErrorCode() + ")",
                             "the device to accept data");
                 }
                 done += n;
@@ -188,7 +200,7 @@ public final class SerialTransport implements AutoCloseable {
     }
 
     /**
-     * Writes one command line with its {@code \n} terminator.
+     * Writes one command line with its {@code \n} terminator, as one unit; safe from any thread.
      *
      * @param line the command, ASCII, without terminator
      */

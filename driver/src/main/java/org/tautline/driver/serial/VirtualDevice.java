@@ -1,11 +1,9 @@
 package org.tautline.driver.serial;
 
+import java.nio.charset.StandardCharsets;
 import java.util.ArrayDeque;
 import java.util.LinkedHashMap;
-import java.util.List;
-import java.util.Locale;
 import java.util.Map;
-import java.util.function.Consumer;
 
 import org.tautline.driver.RigException;
 import org.tautline.driver.sim.SensorSetup;
@@ -15,16 +13,18 @@ import org.tautline.driver.spi.ChannelInfo;
 import org.tautline.driver.spi.SampleBlock;
 
 /**
- * The device side of PROTOCOL.md over a {@link SimulatedRig}: reads command lines, keeps the error queue,
- * the block history and the watchdog, and hands replies and blocks to an output.
+ * The device side of PROTOCOL.md over a {@link SimulatedRig}: runs command lines as they arrive, keeps the error
+ * queue, the block history and the watchdog, and queues replies, blocks and notices on a {@link DeviceOutbox}.
  *
- * <p>Methods are synchronised: the command reader and the streaming and watchdog thread share the state.
+ * <p>The simulated rig produces samples on demand: a fetch's block is computed when the sender reaches it, a ramp's
+ * samples when the ramp is commanded, a streaming block at the sample rate. Methods are synchronised: the port
+ * reader, the sender and the worker thread share the state.
  */
 final class VirtualDevice {
     /** Protocol versions this device speaks. */
-    static final int PROTOCOL_MIN = 1;
+    static final int PROTOCOL_MIN = 2;
     /** Highest protocol version. */
-    static final int PROTOCOL_MAX = 1;
+    static final int PROTOCOL_MAX = 2;
     /** Error queue length; IEEE 488.2 / SCPI-1999 replace the newest entry by -350 on overflow (from memory). */
     static final int ERROR_QUEUE_LENGTH = 16;
     /** Blocks kept for {@code ACQ:RESEND?}. */
@@ -37,33 +37,40 @@ final class VirtualDevice {
     static final int MAX_BLOCK_SAMPLES = 65536;
     /** Largest {@code ACQ:FETCH?} request, samples per channel. */
     static final int MAX_FETCH_SAMPLES = 1 << 24;
+    /** Longest ramp, s. */
+    static final double MAX_RAMP_S = 3600;
+    /** Streaming blocks allowed to wait for the line; a further one is dropped (an overrun). */
+    static final int STREAM_QUEUE_BLOCKS = 2;
 
     private final SimulationConfig config;
-    private final Consumer<byte[]> output;
-    private final Consumer<String> log;
+    private final DeviceOutbox outbox;
+    private final VirtualRigLog log;
+    private final double[] sensitivity;
     private SimulatedRig rig;
     private int bootCount;
     private final ArrayDeque<DeviceError> errors = new ArrayDeque<>();
     private final Map<Long, byte[]> history = new LinkedHashMap<>();
+    private final ArrayDeque<DeviceOutbox.FetchJob> fetches = new ArrayDeque<>();
     private long nextSequence;
     private SampleFormat format = SampleFormat.FLOAT32_LE;
     private int blockSamples = DEFAULT_BLOCK_SAMPLES;
     private int watchdogMs = DEFAULT_WATCHDOG_MS;
-    private int protocolVersion = PROTOCOL_MAX;
+    private int protocolVersion = PROTOCOL_MIN;
     private boolean streaming;
     private double frequencyHz;
     private double amplitudeV;
-    private long lastActivityNs = System.nanoTime();
-    private final double[] sensitivity;
+    private int lastFault;
+    private long overruns;
+    private long lastLineNs = System.nanoTime();
 
     /**
      * @param config what to simulate
-     * @param output where replies and blocks go, in order
-     * @param log where events go, for the server's log
+     * @param outbox where replies, blocks and notices go
+     * @param log the event log
      */
-    VirtualDevice(SimulationConfig config, Consumer<byte[]> output, Consumer<String> log) {
+    VirtualDevice(SimulationConfig config, DeviceOutbox outbox, VirtualRigLog log) {
         this.config = config;
-        this.output = output;
+        this.outbox = outbox;
         this.log = log;
         SensorSetup s = config.sensors();
         double counts = Math.pow(2, s.adcBits() - 1);
@@ -73,6 +80,9 @@ final class VirtualDevice {
 
     /** Forgets everything as a power cycle would, then announces it with {@code !RESET <boot count>}. */
     synchronized void reset() {
+        setOutput(false, "reset");
+        abortFetches();
+        outbox.dropAll();
         rig.close();
         rig = new SimulatedRig(config);
         bootCount++;
@@ -82,19 +92,25 @@ final class VirtualDevice {
         format = SampleFormat.FLOAT32_LE;
         blockSamples = DEFAULT_BLOCK_SAMPLES;
         watchdogMs = DEFAULT_WATCHDOG_MS;
+        protocolVersion = PROTOCOL_MIN;
         streaming = false;
         frequencyHz = 0.0;
         amplitudeV = 0.0;
-        log.accept("reset: state forgotten, output off, boot " + bootCount);
-        send("!RESET " + bootCount);
+        lastFault = 0;
+        log.add("event", "reset: state forgotten, boot counter " + bootCount);
+        outbox.urgent(line("!RESET " + bootCount));
     }
 
-    /** Switches the output off without a command (port lost, device fault). @param why for the log */
-    synchronized void outputOff(String why) {
-        if (rig.exciter().isOutputEnabled()) {
-            rig.exciter().setOutputEnabled(false);
-            log.accept("output off: " + why);
+    private void setOutput(boolean on, String cause) {
+        if (rig.exciter().isOutputEnabled() != on) {
+            rig.exciter().setOutputEnabled(on);
+            log.add("output", (on ? "on " : "off ") + cause);
         }
+    }
+
+    /** Switches the output off without a command. @param why the cause, for the log */
+    synchronized void outputOff(String why) {
+        setOutput(false, why);
     }
 
     /** @return true while the drive output is on */
@@ -102,18 +118,29 @@ final class VirtualDevice {
         return rig.exciter().isOutputEnabled();
     }
 
-    /** An amplifier fault: the output goes off and error 110 is queued. */
+    /** An amplifier fault: the output goes off, error 110 is queued and {@code !FAULT 110} is sent at once. */
     synchronized void amplifierFault() {
-        outputOff("amplifier fault");
-        queue(new DeviceError(110, "Amplifier fault: output switched off"));
+        deviceFault(110, "Amplifier fault: output switched off", "amplifier fault");
     }
 
-    /** Checks the watchdog; call often. */
+    private void deviceFault(int code, String message, String cause) {
+        setOutput(false, cause);
+        DeviceError e = new DeviceError(code, message);
+        queue(e);
+        lastFault = code;
+        outbox.urgent(line("!FAULT " + e.reply()));
+    }
+
+    /** Forgets the blocks kept for resends, as a device with a small buffer would. */
+    synchronized void forgetHistory() {
+        history.clear();
+    }
+
+    /** Checks the watchdog; call often. @param nowNs {@link System#nanoTime()} */
     synchronized void checkWatchdog(long nowNs) {
-        if (rig.exciter().isOutputEnabled() && nowNs - lastActivityNs > watchdogMs * 1_000_000L) {
-            outputOff("watchdog expired after " + watchdogMs + " ms without a command");
-            queue(new DeviceError(101, "Watchdog expired: output switched off"));
-            send("!WDOG " + watchdogMs);
+        if (rig.exciter().isOutputEnabled() && nowNs - lastLineNs > watchdogMs * 1_000_000L) {
+            deviceFault(101, "Watchdog expired after " + watchdogMs + " ms: output switched off",
+                    "watchdog expired after " + watchdogMs + " ms without a command line");
         }
     }
 
@@ -127,20 +154,69 @@ final class VirtualDevice {
         return Math.round(blockSamples / config.sampleRateHz() * 1e9);
     }
 
-    /** Sends the next streaming block. */
+    /** @return streaming blocks dropped because the line could not carry them */
+    synchronized long overruns() {
+        return overruns;
+    }
+
+    /** Makes the next streaming block; drops it when {@value #STREAM_QUEUE_BLOCKS} are already waiting. */
     synchronized void streamOneBlock() {
-        if (streaming) {
-            sendBlock(blockSamples);
+        if (!streaming) {
+            return;
         }
+        if (outbox.queuedStreamBlocks() >= STREAM_QUEUE_BLOCKS) {
+            long first = rig.acquisition().nextSampleIndex();
+            rig.acquisition().read(blockSamples);
+            overruns++;
+            log.add("event", "stream overrun: samples " + first + ".." + (first + blockSamples - 1) + " dropped");
+            return;
+        }
+        outbox.sendStreamBlock(makeBlock(blockSamples, format));
     }
 
-    /** Marks the end of a reply for the watchdog. */
-    synchronized void activity() {
-        lastActivityNs = System.nanoTime();
+    /**
+     * Makes the next block of a fetch.
+     *
+     * @param job the fetch
+     * @return the block, or null when the fetch was aborted or is done
+     */
+    synchronized byte[] produce(DeviceOutbox.FetchJob job) {
+        if (job.done()) {
+            return null;
+        }
+        int n = Math.min(job.blockSamples, job.remaining);
+        byte[] b = makeBlock(n, job.format);
+        job.remaining -= n;
+        if (job.done()) {
+            fetches.remove(job);
+        }
+        return b;
     }
 
-    private void send(String line) {
-        output.accept((line + "\n").getBytes(java.nio.charset.StandardCharsets.US_ASCII));
+    /** @return the status line for tag, as the device stands now */
+    synchronized byte[] statusLine(long tag) {
+        return line(new DeviceStatus(tag, rig.exciter().isOutputEnabled(), bootCount, errors.size(), lastFault,
+                nextToDeliver(), sequenceAfterFetches()).line());
+    }
+
+    private long nextToDeliver() {
+        long n = rig.acquisition().nextSampleIndex();
+        for (DeviceOutbox.FetchJob j : fetches) {
+            n += j.remaining;
+        }
+        return n;
+    }
+
+    private long sequenceAfterFetches() {
+        long s = nextSequence;
+        for (DeviceOutbox.FetchJob j : fetches) {
+            s += (j.remaining + j.blockSamples - 1) / j.blockSamples;
+        }
+        return s & 0xFFFFFFFFL;
+    }
+
+    private static byte[] line(String text) {
+        return (text + "\n").getBytes(StandardCharsets.US_ASCII);
     }
 
     private void queue(DeviceError e) {
@@ -152,161 +228,83 @@ final class VirtualDevice {
         errors.addLast(e);
     }
 
+    /** A line longer than the limit arrived and was discarded. @param bytes its length without terminator */
+    synchronized void overlongLine(int bytes) {
+        lastLineNs = System.nanoTime();
+        log.add("recv", "(a line of " + bytes + " bytes, discarded)");
+        queue(new DeviceError(-363, "Input buffer overrun; a line of " + bytes + " bytes, at most "
+                + StreamDecoder.MAX_LINE_BYTES + " allowed"));
+    }
+
     /**
-     * Handles one command line.
+     * Runs one command line.
      *
      * @param text the line without its terminator
      */
     synchronized void handle(String text) {
-        lastActivityNs = System.nanoTime();
+        lastLineNs = System.nanoTime();
         CommandLine c = CommandLine.parse(text);
         if (c == null) {
             return;
         }
-        if (c.header().equals("DRIVE:OUT") && !c.query()) {
-            log.accept("command " + text.strip());
-        }
+        log.add("recv", text.strip());
         try {
-            String reply = execute(c);
+            String reply = DeviceCommands.execute(this, c);
             if (reply != null) {
-                send(reply);
+                outbox.send(line(reply));
             }
         } catch (CommandFault f) {
-            queue(f.error);
-            if (c.query()) {
-                send("!ERR " + f.error.reply());
-            }
+            refuse(c, f.error());
         } catch (RigException e) {
-            DeviceError err = new DeviceError(-200, "Execution error; " + e.getMessage());
-            queue(err);
-            if (c.query()) {
-                send("!ERR " + err.reply());
-            }
+            refuse(c, new DeviceError(-200, "Execution error; " + e.getMessage()));
         }
     }
 
-    private String execute(CommandLine c) {
-        String h = c.name();
-        List<String> p = c.parameters();
-        return switch (h) {
-            case "*IDN?" -> "Tautline,Virtual rig,SIM-" + config.randomSeed() + "," + PROTOCOL_MAX + ".0";
-            case "*RST" -> {
-                rig.exciter().setOutputEnabled(false);
-                amplitudeV = 0.0;
-                if (frequencyHz > 0) {
-                    rig.exciter().setSine(frequencyHz, 0.0);
-                }
-                streaming = false;
-                format = SampleFormat.FLOAT32_LE;
-                blockSamples = DEFAULT_BLOCK_SAMPLES;
-                yield null;
-            }
-            case "*OPC?" -> "1";
-            case "*CLS" -> {
-                errors.clear();
-                yield null;
-            }
-            case "SYST:ERR?" -> (errors.isEmpty() ? DeviceError.NONE : errors.removeFirst()).reply();
-            case "SYST:VERS?" -> "1999.0";
-            case "LINK:PROT?" -> PROTOCOL_MIN + "," + PROTOCOL_MAX;
-            case "LINK:PROT" -> {
-                int v = integer(p, 0, PROTOCOL_MIN, PROTOCOL_MAX);
-                protocolVersion = v;
-                yield null;
-            }
-            case "LINK:WDOG" -> {
-                watchdogMs = integer(p, 0, 50, 60000);
-                yield null;
-            }
-            case "LINK:WDOG?" -> Integer.toString(watchdogMs);
-            case "LINK:FEED" -> null;
-            case "LINK:BOOT?" -> Integer.toString(bootCount);
-            case "DRIVE:SINE" -> {
-                double f = number(p, 0);
-                double a = number(p, 1);
-                rig.exciter().setSine(f, a);
-                frequencyHz = f;
-                amplitudeV = a;
-                yield null;
-            }
-            case "DRIVE:RAMP" -> {
-                double a = number(p, 0);
-                rig.exciter().rampTo(a, number(p, 1));
-                amplitudeV = a;
-                yield null;
-            }
-            case "DRIVE:OUT" -> {
-                rig.exciter().setOutputEnabled(onOff(p));
-                yield null;
-            }
-            case "DRIVE:OUT?" -> rig.exciter().isOutputEnabled() ? "1" : "0";
-            case "DRIVE:FREQ?" -> Double.toString(frequencyHz);
-            case "DRIVE:AMPL?" -> Double.toString(amplitudeV);
-            case "DRIVE:MAX?" -> Double.toString(rig.exciter().maxAmplitudeV());
-            case "ACQ:RATE?" -> Double.toString(config.sampleRateHz());
-            case "ACQ:CHAN:COUNT?" -> Integer.toString(rig.acquisition().channels().size());
-            case "ACQ:CHAN?" -> {
-                int i = integer(p, 0, 0, rig.acquisition().channels().size() - 1);
-                ChannelInfo ch = rig.acquisition().channels().get(i);
-                yield ch.name() + "," + ch.quantity() + "," + ch.unit() + "," + sensitivity[i];
-            }
-            case "ACQ:FORM" -> {
-                SampleFormat f = p.isEmpty() ? null : SampleFormat.ofMnemonic(p.get(0));
-                if (f == null) {
-                    throw new CommandFault(-224, "Illegal parameter value; expected F32, I24 or F64");
-                }
-                format = f;
-                yield null;
-            }
-            case "ACQ:FORM?" -> format.mnemonic();
-            case "ACQ:BLOCK" -> {
-                blockSamples = integer(p, 0, 1, MAX_BLOCK_SAMPLES);
-                yield null;
-            }
-            case "ACQ:BLOCK?" -> Integer.toString(blockSamples);
-            case "ACQ:NEXT?" -> Long.toString(rig.acquisition().nextSampleIndex());
-            case "ACQ:SEQ?" -> Long.toString(nextSequence);
-            case "ACQ:FETCH?" -> {
-                if (streaming) {
-                    throw new CommandFault(-221, "Settings conflict; ACQ:FETCH? while streaming, send ACQ:STREAM OFF");
-                }
-                int n = integer(p, 0, 1, MAX_FETCH_SAMPLES);
-                for (int done = 0; done < n; done += blockSamples) {
-                    sendBlock(Math.min(blockSamples, n - done));
-                }
-                yield null;
-            }
-            case "ACQ:STREAM" -> {
-                streaming = onOff(p);
-                yield null;
-            }
-            case "ACQ:STREAM?" -> streaming ? "1" : "0";
-            case "ACQ:RESEND?" -> {
-                long seq = wholeNumber(p, 0, 0, 0xFFFFFFFFL);
-                byte[] b = history.get(seq);
-                if (b == null) {
-                    throw new CommandFault(102, "Block " + seq + " not available for resend; the last "
-                            + HISTORY_BLOCKS + " are kept");
-                }
-                log.accept("resend block " + seq);
-                output.accept(b);
-                yield null;
-            }
-            default -> throw new CommandFault(-113, "Undefined header; " + h);
-        };
+    /** A refused query is answered by {@code !ERR} in place of its reply and not queued; a refused set command is queued. */
+    private void refuse(CommandLine c, DeviceError e) {
+        if (c.query()) {
+            outbox.send(line("!ERR " + e.reply()));
+        } else {
+            queue(e);
+        }
     }
 
-    private void sendBlock(int n) {
-        long first = rig.acquisition().nextSampleIndex();
-        SampleBlock s = rig.acquisition().read(n);
-        long seq = nextSequence;
-        nextSequence = (nextSequence + 1) & 0xFFFFFFFFL;
-        byte[] bytes = BlockCodec.encode(new DataBlock(seq, first, format, s.samples()), sensitivity);
-        history.put(seq, bytes);
-        if (history.size() > HISTORY_BLOCKS) {
-            history.remove(history.keySet().iterator().next());
-        }
-        output.accept(bytes);
+    // The state DeviceCommands works on; called with this device's lock held.
+
+    SimulatedRig rig() {
+        return rig;
+    }
+
+    SimulationConfig config() {
+        return config;
+    }
+
+    double sensitivity(int channel) {
+        return sensitivity[channel];
+    }
+
+    String identity() {
+        return "Tautline,Virtual rig,SIM-" + config.randomSeed() + "," + PROTOCOL_MAX + ".0";
+    }
+
+    void clearErrors() {
+        errors.clear();
+    }
+
+    DeviceError takeError() {
+        return errors.isEmpty() ? DeviceError.NONE : errors.removeFirst();
+    }
+
+    int errorCount() {
+        return errors.size();
+    }
+
+    int bootCount() {
+        return bootCount;
+    }
+
+    void protocolVersion(int v) {
+        protocolVersion = v;
     }
 
     /** @return the protocol version selected by {@code LINK:PROT} */
@@ -314,52 +312,112 @@ final class VirtualDevice {
         return protocolVersion;
     }
 
-    private static boolean onOff(List<String> p) {
-        String v = p.isEmpty() ? "" : p.get(0).toUpperCase(Locale.ROOT);
-        return switch (v) {
-            case "ON", "1" -> true;
-            case "OFF", "0" -> false;
-            default -> throw new CommandFault(p.isEmpty() ? -109 : -224, p.isEmpty() ? "Missing parameter; expected ON or OFF"
-                    : "Illegal parameter value; expected ON or OFF, got " + p.get(0));
-        };
+    int watchdogMs() {
+        return watchdogMs;
     }
 
-    private static double number(List<String> p, int i) {
-        if (p.size() <= i) {
-            throw new CommandFault(-109, "Missing parameter; expected " + (i + 1) + " or more");
-        }
-        try {
-            double v = Double.parseDouble(p.get(i));
-            if (!Double.isFinite(v)) {
-                throw new CommandFault(-222, "Data out of range; " + p.get(i));
-            }
-            return v;
-        } catch (NumberFormatException e) {
-            throw new CommandFault(-102, "Syntax error; not a number: " + p.get(i));
-        }
+    void watchdogMs(int ms) {
+        watchdogMs = ms;
     }
 
-    private static int integer(List<String> p, int i, int min, int max) {
-        return (int) wholeNumber(p, i, min, max);
+    void output(boolean on, String cause) {
+        setOutput(on, cause);
     }
 
-    private static long wholeNumber(List<String> p, int i, long min, long max) {
-        double v = number(p, i);
-        if (v != Math.rint(v) || v < min || v > max) {
-            throw new CommandFault(-222, "Data out of range; expected a whole number " + min + ".." + max + ", got "
-                    + p.get(i));
-        }
-        return (long) v;
+    double frequencyHz() {
+        return frequencyHz;
     }
 
-    /** A command the device refuses, with its error-queue entry. */
-    private static final class CommandFault extends RuntimeException {
-        private static final long serialVersionUID = 1L;
-        private final transient DeviceError error;
+    double amplitudeV() {
+        return amplitudeV;
+    }
 
-        CommandFault(int code, String message) {
-            super(message, null, false, false);
-            this.error = new DeviceError(code, message);
+    void drive(double f, double a) {
+        frequencyHz = f;
+        amplitudeV = a;
+    }
+
+    SampleFormat format() {
+        return format;
+    }
+
+    void format(SampleFormat f) {
+        format = f;
+    }
+
+    int blockSamples() {
+        return blockSamples;
+    }
+
+    void blockSamples(int n) {
+        blockSamples = n;
+    }
+
+    boolean streamingNow() {
+        return streaming;
+    }
+
+    void streaming(boolean on) {
+        streaming = on;
+    }
+
+    boolean fetchInProgress() {
+        return !fetches.isEmpty();
+    }
+
+    long nextSample() {
+        return nextToDeliver();
+    }
+
+    long nextSequence() {
+        return sequenceAfterFetches();
+    }
+
+    void fetch(int samples) {
+        DeviceOutbox.FetchJob job = new DeviceOutbox.FetchJob(samples, blockSamples, format);
+        fetches.add(job);
+        outbox.fetch(job);
+    }
+
+    /** Ends every fetch and drops everything queued but not begun. */
+    void abortFetches() {
+        for (DeviceOutbox.FetchJob j : fetches) {
+            j.cancelled = true;
         }
+        fetches.clear();
+        outbox.dropOrdered();
+    }
+
+    void status(long tag) {
+        outbox.urgent(() -> statusLine(tag));
+    }
+
+    /** @return false when block seq is no longer kept */
+    boolean resend(long seq) {
+        byte[] b = history.get(seq);
+        if (b == null) {
+            return false;
+        }
+        log.add("event", "resend block " + seq);
+        outbox.send(b);
+        return true;
+    }
+
+    private byte[] makeBlock(int n, SampleFormat f) {
+        long first = rig.acquisition().nextSampleIndex();
+        SampleBlock s = rig.acquisition().read(n);
+        long seq = nextSequence;
+        nextSequence = (nextSequence + 1) & 0xFFFFFFFFL;
+        byte[] bytes = BlockCodec.encode(new DataBlock(seq, first, f, s.samples()), sensitivity);
+        history.put(seq, bytes);
+        if (history.size() > HISTORY_BLOCKS) {
+            history.remove(history.keySet().iterator().next());
+        }
+        return bytes;
+    }
+
+    /** @return channel i */
+    ChannelInfo channel(int i) {
+        return rig.acquisition().channels().get(i);
     }
 }

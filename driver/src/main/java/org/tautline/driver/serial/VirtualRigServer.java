@@ -1,50 +1,48 @@
 package org.tautline.driver.serial;
 
-import java.util.ArrayList;
+import java.nio.charset.StandardCharsets;
 import java.util.List;
-import java.util.concurrent.LinkedBlockingQueue;
 import java.util.concurrent.TimeUnit;
+import java.util.concurrent.atomic.AtomicLong;
+import java.util.concurrent.locks.LockSupport;
+import java.util.function.Supplier;
 
 import org.tautline.driver.RigLinkException;
 import org.tautline.driver.sim.SimulationConfig;
 
 /**
  * A virtual rig: a {@link org.tautline.driver.sim.SimulatedRig} served through PROTOCOL.md on a serial port,
- * with switches that inject link faults.
+ * with switches and a schedule that inject link faults.
  *
- * <p>Three threads: the port reader runs each command as its line arrives; a sender writes replies and
- * blocks in order (applying the fault switches); a worker checks the watchdog every 5 ms and paces
- * streaming at the simulated sample rate. Every event that matters for safety (each {@code DRIVE:OUT}
- * command, each time the device switches the output off itself, resets, resends) goes to {@link #log()}
- * with its {@link System#nanoTime()}.
+ * <p>Three threads: the port reader runs each command as its line arrives; a sender writes urgent items (notices,
+ * status replies) and then the ordered ones (replies, blocks), applying the faults, and paced at the baud rate when
+ * {@link VirtualRigSettings#paced()}; a worker checks the watchdog every 5 ms and paces streaming at the simulated
+ * sample rate. Every command line received, notice sent, output change and injected fault goes to the
+ * {@link VirtualRigLog} ({@link #log()}, and the settings' log file).
  */
 public final class VirtualRigServer implements AutoCloseable {
-    private static final byte[] STOP = new byte[0];
-
-    /**
-     * One logged event.
-     *
-     * @param nanoTime {@link System#nanoTime()} when it happened
-     * @param event what happened, for example {@code command DRIVE:OUT OFF}
-     */
-    public record LogEntry(long nanoTime, String event) {
-    }
-
     private final SerialTransport transport;
     private final PtyPair ownedPair;
+    private final VirtualRigSettings settings;
+    private final DeviceOutbox outbox = new DeviceOutbox();
+    private final VirtualRigLog log;
     private final VirtualDevice device;
-    private final LinkedBlockingQueue<byte[]> outbox = new LinkedBlockingQueue<>();
-    private final List<LogEntry> log = new ArrayList<>();
+    private final SenderFaults faults = new SenderFaults();
     private final StringBuilder pendingLine = new StringBuilder();
+    private int pendingLength;
     private final Thread sender;
     private final Thread worker;
-    private final SenderFaults faults = new SenderFaults();
+    private final AtomicLong itemsSent = new AtomicLong();
+    private long pacedUntilNs;
     private volatile boolean closed;
 
-    private VirtualRigServer(SimulationConfig config, SerialTransport transport, PtyPair ownedPair) {
+    private VirtualRigServer(SimulationConfig config, SerialTransport transport, PtyPair ownedPair,
+                             VirtualRigSettings settings, VirtualRigLog log) {
         this.transport = transport;
         this.ownedPair = ownedPair;
-        this.device = new VirtualDevice(config, outbox::add, this::record);
+        this.settings = settings;
+        this.log = log;
+        this.device = new VirtualDevice(config, outbox, log);
         this.sender = new Thread(this::sendLoop, "virtual-rig sender " + transport.port());
         this.worker = new Thread(this::workLoop, "virtual-rig worker " + transport.port());
         sender.setDaemon(true);
@@ -52,7 +50,7 @@ public final class VirtualRigServer implements AutoCloseable {
     }
 
     /**
-     * Serves a simulated rig on a serial port, typically the device end of a {@link PtyPair}.
+     * Serves a simulated rig on a serial port, typically the device end of a {@link PtyPair}; unpaced, log in memory.
      *
      * @param config what to simulate
      * @param devicePath the port to serve on
@@ -60,28 +58,60 @@ public final class VirtualRigServer implements AutoCloseable {
      * @return the running server
      */
     public static VirtualRigServer start(SimulationConfig config, String devicePath, int baud) {
-        return begin(config, SerialTransport.open(devicePath, baud), null);
+        return start(config, devicePath, VirtualRigSettings.of(baud));
     }
 
     /**
-     * Makes a {@link PtyPair} and serves a simulated rig on its device end; the pair closes with the server.
+     * Serves a simulated rig on a serial port.
+     *
+     * @param config what to simulate
+     * @param devicePath the port to serve on
+     * @param settings baud rate, pacing, log file
+     * @return the running server
+     */
+    public static VirtualRigServer start(SimulationConfig config, String devicePath, VirtualRigSettings settings) {
+        VirtualRigLog log = new VirtualRigLog(settings.logFile());
+        try {
+            return begin(config, SerialTransport.open(devicePath, settings.baud()), null, settings, log);
+        } catch (RuntimeException e) {
+            log.close();
+            throw e;
+        }
+    }
+
+    /**
+     * Makes a {@link PtyPair} and serves a simulated rig on its device end; unpaced, log in memory.
      *
      * @param config what to simulate
      * @param baud baud rate, bits per second
      * @return the running server; connect a {@link SerialRig} to {@link #hostPath()}
      */
     public static VirtualRigServer startOnPty(SimulationConfig config, int baud) {
+        return startOnPty(config, VirtualRigSettings.of(baud));
+    }
+
+    /**
+     * Makes a {@link PtyPair} and serves a simulated rig on its device end; the pair closes with the server.
+     *
+     * @param config what to simulate
+     * @param settings baud rate, pacing, log file
+     * @return the running server; connect a {@link SerialRig} to {@link #hostPath()}
+     */
+    public static VirtualRigServer startOnPty(SimulationConfig config, VirtualRigSettings settings) {
+        VirtualRigLog log = new VirtualRigLog(settings.logFile());
         PtyPair pair = PtyPair.open();
         try {
-            return begin(config, SerialTransport.open(pair.devicePath(), baud), pair);
+            return begin(config, SerialTransport.open(pair.devicePath(), settings.baud()), pair, settings, log);
         } catch (RuntimeException e) {
             pair.close();
+            log.close();
             throw e;
         }
     }
 
-    private static VirtualRigServer begin(SimulationConfig config, SerialTransport transport, PtyPair pair) {
-        VirtualRigServer s = new VirtualRigServer(config, transport, pair);
+    private static VirtualRigServer begin(SimulationConfig config, SerialTransport transport, PtyPair pair,
+                                          VirtualRigSettings settings, VirtualRigLog log) {
+        VirtualRigServer s = new VirtualRigServer(config, transport, pair, settings, log);
         s.sender.start();
         s.worker.start();
         transport.startReading(new SerialTransport.Receiver() {
@@ -108,34 +138,72 @@ public final class VirtualRigServer implements AutoCloseable {
         return ownedPair == null ? null : ownedPair.hostPath();
     }
 
+    /** @return the settings the server runs with */
+    public VirtualRigSettings settings() {
+        return settings;
+    }
+
     private void received(byte[] data, int offset, int length) {
         for (int i = offset; i < offset + length; i++) {
             char ch = (char) (data[i] & 0xFF);
             if (ch == '\n') {
-                device.handle(pendingLine.toString());
+                if (pendingLength > StreamDecoder.MAX_LINE_BYTES) {
+                    device.overlongLine(pendingLength);
+                } else {
+                    device.handle(pendingLine.toString());
+                }
                 pendingLine.setLength(0);
-            } else if (pendingLine.length() < StreamDecoder.MAX_LINE_BYTES) {
-                pendingLine.append(ch);
+                pendingLength = 0;
+            } else {
+                pendingLength++;
+                if (pendingLength <= StreamDecoder.MAX_LINE_BYTES) {
+                    pendingLine.append(ch);
+                }
             }
         }
     }
 
-    private void record(String event) {
-        synchronized (log) {
-            log.add(new LogEntry(System.nanoTime(), event));
-        }
-    }
-
-    /** @return a copy of the event log, oldest first */
-    public List<LogEntry> log() {
-        synchronized (log) {
-            return List.copyOf(log);
-        }
+    /** @return a copy of the event log kept in memory, oldest first (see {@link VirtualRigLog} for the format) */
+    public List<VirtualRigLog.Entry> log() {
+        return log.entries();
     }
 
     /** @return true while the simulated drive output is on */
     public boolean outputEnabled() {
         return device.outputEnabled();
+    }
+
+    /** @return lines and data blocks sent so far (the unit of {@link FaultSchedule} moments) */
+    public long itemsSent() {
+        return itemsSent.get();
+    }
+
+    /** @return streaming blocks dropped because the line could not carry them (only with pacing) */
+    public long streamOverruns() {
+        return device.overruns();
+    }
+
+    /**
+     * Adds scheduled faults; their moments count from the items sent so far.
+     *
+     * @param schedule the faults and their moments
+     */
+    public void schedule(FaultSchedule schedule) {
+        faults.schedule(schedule, itemsSent.get());
+        outbox.nudge();
+    }
+
+    /**
+     * @param fault a kind
+     * @return how many faults of that kind were injected so far, scheduled or switched
+     */
+    public long injected(InjectedFault fault) {
+        return faults.applied(fault);
+    }
+
+    /** @return scheduled faults not yet injected */
+    public int pendingFaults() {
+        return faults.pending();
     }
 
     /** @param count bytes to cut out of the middle of the next data block sent */
@@ -158,7 +226,7 @@ public final class VirtualRigServer implements AutoCloseable {
         faults.insertGarbage(garbage);
     }
 
-    /** The next reply line is replaced by a line the protocol does not allow. */
+    /** The next reply or status line is replaced by a line the protocol does not allow. */
     public void garbleNextReply() {
         faults.garbleNextReply();
     }
@@ -166,42 +234,125 @@ public final class VirtualRigServer implements AutoCloseable {
     /** @param durationMs from now, nothing is sent for this long; commands are still obeyed */
     public void stall(long durationMs) {
         faults.stallUntil(System.nanoTime() + durationMs * 1_000_000L);
-        record("stall " + durationMs + " ms");
+        faults.count(InjectedFault.STALL);
+        log.add("fault", "stall " + durationMs + " ms");
+    }
+
+    /** The device forgets the blocks it keeps for resends. */
+    public void forgetHistory() {
+        faults.count(InjectedFault.FORGET_HISTORY);
+        log.add("fault", "forget-history");
+        device.forgetHistory();
     }
 
     /** Resets the device: it forgets its state, switches the output off and sends {@code !RESET}. */
     public void reset() {
+        faults.count(InjectedFault.RESET);
+        log.add("fault", "reset");
         device.reset();
     }
 
-    /** An amplifier fault: the device switches the output off and queues error 110. */
+    /** An amplifier fault: the device switches the output off, queues error 110 and sends {@code !FAULT 110}. */
     public void amplifierFault() {
+        faults.count(InjectedFault.AMPLIFIER_FAULT);
+        log.add("fault", "amplifier-fault");
         device.amplifierFault();
     }
 
     /** The device vanishes: output off, port closed, and the owned pty pair (if any) killed. */
     public void disappear() {
+        faults.count(InjectedFault.DISAPPEAR);
+        log.add("fault", "disappear");
         device.outputOff("device disappeared");
-        record("disappear");
         shutDown();
+    }
+
+    /**
+     * Injects one fault now.
+     *
+     * @param fault what
+     * @param parameter bytes for {@link InjectedFault#DROP_BYTES}, milliseconds for {@link InjectedFault#STALL}
+     */
+    public void inject(InjectedFault fault, int parameter) {
+        switch (fault) {
+            case DROP_BYTES -> dropBytes(parameter);
+            case CORRUPT_BLOCK -> corruptBlock(1);
+            case LOSE_BLOCK -> loseBlock(1);
+            case STALL -> stall(parameter);
+            case FORGET_HISTORY -> forgetHistory();
+            case RESET -> reset();
+            case AMPLIFIER_FAULT -> amplifierFault();
+            case DISAPPEAR -> disappear();
+        }
     }
 
     private void sendLoop() {
         try {
-            while (true) {
-                byte[] item = outbox.take();
-                if (item == STOP) {
+            while (!closed) {
+                for (FaultSchedule.Entry e : faults.due(itemsSent.get())) {
+                    inject(e.fault(), e.parameter());
+                }
+                if (closed) {
                     return;
                 }
-                for (byte[] out : faults.apply(item, this::record)) {
-                    transport.write(out);
+                if (faults.waitOutStall()) {
+                    log.add("event", "stall ended");
                 }
-                device.activity();
+                Object o = outbox.take();
+                if (o == null) {
+                    return;
+                }
+                byte[] item = resolve(o);
+                if (item == null) {
+                    continue;
+                }
+                for (byte[] out : faults.apply(item, text -> log.add("fault", text))) {
+                    write(out);
+                }
+                if (item[0] == '!') {
+                    log.add("notice", new String(item, StandardCharsets.US_ASCII).strip());
+                }
+                itemsSent.incrementAndGet();
             }
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
         } catch (RigLinkException e) {
             device.outputOff("write failed: " + e.getMessage());
+        }
+    }
+
+    @SuppressWarnings("unchecked")
+    private byte[] resolve(Object o) {
+        if (o == DeviceOutbox.NUDGE) {
+            return null;
+        }
+        if (o instanceof DeviceOutbox.FetchJob job) {
+            return device.produce(job);
+        }
+        if (o instanceof Supplier<?> lazy) {
+            return ((Supplier<byte[]>) lazy).get();
+        }
+        return (byte[]) o;
+    }
+
+    /** Writes, at most at the line's byte rate when paced (chunks of about 1 ms, at most 2 ms of catching up). */
+    private void write(byte[] b) {
+        if (!settings.paced()) {
+            transport.write(b);
+            return;
+        }
+        double bytesPerS = LinkBudget.capacityBytesPerS(settings.baud());
+        int chunk = (int) Math.max(1, bytesPerS / 1000);
+        for (int off = 0; off < b.length; off += chunk) {
+            int n = Math.min(chunk, b.length - off);
+            long now = System.nanoTime();
+            pacedUntilNs = Math.max(pacedUntilNs, now - 2_000_000L);
+            while (pacedUntilNs > now) {
+                LockSupport.parkNanos(pacedUntilNs - now);
+                now = System.nanoTime();
+            }
+            transport.write(b, off, n);
+            pacedUntilNs += (long) (n * 1e9 / bytesPerS);
         }
     }
 
@@ -233,24 +384,28 @@ public final class VirtualRigServer implements AutoCloseable {
             return;
         }
         closed = true;
-        outbox.add(STOP);
+        outbox.close();
         worker.interrupt();
         transport.close();
         if (ownedPair != null) {
             ownedPair.close();
         }
         try {
-            sender.join(1000);
-            worker.join(1000);
+            for (Thread t : new Thread[] {sender, worker}) {
+                if (t != Thread.currentThread()) {
+                    t.join(1000);
+                }
+            }
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
         }
     }
 
-    /** Switches the simulated output off, stops the threads, closes the port and any owned pty pair; idempotent. */
+    /** Switches the simulated output off, stops the threads, closes the port, any owned pty pair and the log; idempotent. */
     @Override
     public void close() {
         device.outputOff("server closed");
         shutDown();
+        log.close();
     }
 }
