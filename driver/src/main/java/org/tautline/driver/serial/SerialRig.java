@@ -196,6 +196,18 @@ public final class SerialRig implements Rig {
         return sensitivity[channel];
     }
 
+    /**
+     * How much of real time the link carries: the highest sample rate the baud rate carries for this channel count,
+     * format and block size (PROTOCOL.md, section 11) over the rig's sample rate. Below 1, reads run slower than
+     * real time (fine for stepped sine, whose timing is counted in samples); at 1 or more they keep up.
+     *
+     * @return the fraction, for example 0.57 for 2 channels of float32 at 20 kS/s over 921600 baud
+     */
+    public synchronized double linkRealTimeFraction() {
+        return LinkBudget.maxSampleRateHz(settings.baud(), channels.size(), settings.format(), settings.blockSamples())
+                / sampleRateHz;
+    }
+
     /** @return the settings the rig was opened with */
     public SerialLinkSettings settings() {
         return settings;
