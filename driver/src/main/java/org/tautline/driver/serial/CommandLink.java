@@ -378,44 +378,4 @@ final class CommandLink {
         inbox.abandonPending();
         return status("while resynchronising after " + why);
     }
-
-    /**
-     * @param reply a reply line
-     * @param command the query it answered, for the message
-     * @return the reply as a finite number
-     */
-    double decimal(String reply, String command) {
-        try {
-            double v = Double.parseDouble(reply.strip());
-            if (Double.isFinite(v)) {
-                return v;
-            }
-        } catch (NumberFormatException e) {
-            // Reported below with the reply text.
-        }
-        throw fail(new RigLinkException(Kind.PROTOCOL, port, command + " answered '" + reply + "'", "a finite number"));
-    }
-
-    /**
-     * @param reply a reply line
-     * @param command the query it answered, for the message
-     * @param count how many comma-separated whole numbers it must hold
-     * @return the numbers
-     */
-    long[] numbers(String reply, String command, int count) {
-        String[] parts = reply.split(",", -1);
-        long[] out = new long[count];
-        try {
-            if (parts.length == count) {
-                for (int i = 0; i < count; i++) {
-                    out[i] = Long.parseLong(parts[i].strip());
-                }
-                return out;
-            }
-        } catch (NumberFormatException e) {
-            // Reported below with the reply text.
-        }
-        throw fail(new RigLinkException(Kind.PROTOCOL, port, command + " answered '" + reply + "'",
-                count + " comma-separated whole number(s)"));
-    }
 }

@@ -139,7 +139,7 @@ final class DeviceCommands {
                 long seq = c.wholeNumber(0, 0, 0xFFFFFFFFL);
                 if (!d.resend(seq)) {
                     throw new CommandFault(102, "Block " + seq + " not available for resend; the last "
-                            + VirtualDevice.HISTORY_BLOCKS + " are kept");
+                            + BlockHistory.KEEP + " are kept");
                 }
                 yield null;
             }

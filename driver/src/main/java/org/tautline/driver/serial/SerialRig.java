@@ -1,6 +1,5 @@
 package org.tautline.driver.serial;
 
-import java.util.ArrayList;
 import java.util.List;
 
 import org.tautline.driver.RigDataLostException;
@@ -16,9 +15,9 @@ import org.tautline.driver.spi.SampleBlock;
 /**
  * A rig on a serial port speaking PROTOCOL.md (version 2).
  *
- * <p>Opening switches the output off, reads the identity, agrees a protocol version, sets the watchdog, format
- * and block size, reads the channels (each value twice, see {@link CommandLink#stableQuery}) and takes the boot
- * counter, sample index and sequence number from a checked status. Every drive command is followed by a status
+ * <p>Opening ({@link Handshake}) switches the output off, reads the identity, agrees a protocol version, sets the
+ * watchdog, format and block size, reads the channels, and takes the boot counter, sample index and sequence
+ * number from a checked status. Every drive command is followed by a status
  * ({@code LINK:STAT?}) that must show the same boot counter and an empty error queue. Reads are described in
  * {@link FetchRead}: they return verified, contiguous samples, or throw {@link RigDataLostException} (samples lost,
  * link healthy, measure again) or a {@link RigLinkException} (a fault: the output has been commanded off, at once,
@@ -109,58 +108,22 @@ public final class SerialRig implements Rig {
     }
 
     private void handshake() {
-        link.send("DRIVE:OUT OFF");
-        link.send("ACQ:ABORT");
-        link.send("ACQ:STREAM OFF");
-        link.send("*CLS");
-        String idn = link.stableQuery("*IDN?");
-        String[] f = idn.split(",", -1);
-        if (f.length != 4) {
-            throw link.fail(new RigLinkException(Kind.PROTOCOL, port, "*IDN? answered '" + idn + "'",
-                    "four comma-separated fields: maker,model,serial,firmware"));
-        }
-        identity = f[0].strip() + " " + f[1].strip() + ", serial " + f[2].strip() + ", firmware " + f[3].strip();
-        long[] range = link.numbers(link.stableQuery("LINK:PROT?"), "LINK:PROT?", 2);
-        long version = Math.min(range[1], HOST_PROTOCOL_MAX);
-        if (version < Math.max(range[0], HOST_PROTOCOL_MIN)) {
-            throw link.fail(new RigLinkException(Kind.PROTOCOL, port, "the device speaks protocol versions " + range[0]
-                    + ".." + range[1], "a version in " + HOST_PROTOCOL_MIN + ".." + HOST_PROTOCOL_MAX
-                    + "; update the host or firmware"));
-        }
-        protocolVersion = (int) version;
-        link.send("LINK:PROT " + protocolVersion);
-        link.send("LINK:WDOG " + settings.watchdogMs());
-        link.send("ACQ:FORM " + settings.format().mnemonic());
-        link.send("ACQ:BLOCK " + settings.blockSamples());
-        sampleRateHz = link.decimal(link.stableQuery("ACQ:RATE?"), "ACQ:RATE?");
-        maxAmplitudeV = link.decimal(link.stableQuery("DRIVE:MAX?"), "DRIVE:MAX?");
-        int count = (int) link.numbers(link.stableQuery("ACQ:CHAN:COUNT?"), "ACQ:CHAN:COUNT?", 1)[0];
-        if (count < 1 || count > BlockCodec.MAX_CHANNELS) {
-            throw link.fail(new RigLinkException(Kind.PROTOCOL, port, "ACQ:CHAN:COUNT? answered " + count,
-                    "1.." + BlockCodec.MAX_CHANNELS + " channels"));
-        }
-        List<ChannelInfo> list = new ArrayList<>();
-        sensitivity = new double[count];
-        for (int i = 0; i < count; i++) {
-            String c = link.stableQuery("ACQ:CHAN? " + i);
-            String[] p = c.split(",", -1);
-            if (p.length != 4) {
-                throw link.fail(new RigLinkException(Kind.PROTOCOL, port, "ACQ:CHAN? " + i + " answered '" + c + "'",
-                        "name,quantity,unit,sensitivity"));
-            }
-            list.add(new ChannelInfo(p[0].strip(), p[1].strip(), p[2].strip()));
-            sensitivity[i] = link.decimal(p[3], "ACQ:CHAN? " + i);
-        }
-        channels = List.copyOf(list);
+        Handshake.Result r = Handshake.run(link, settings);
+        identity = r.identity();
+        protocolVersion = r.protocolVersion();
+        sampleRateHz = r.sampleRateHz();
+        maxAmplitudeV = r.maxAmplitudeV();
+        channels = r.channels();
+        sensitivity = r.sensitivity();
         inbox.sensitivity(sensitivity);
-        link.timing(LinkTiming.of(settings, count));
+        link.timing(LinkTiming.of(settings, channels.size()));
         DeviceStatus s = link.status("while setting up the link");
         link.verify(s, false, "after setting up the link");
         bootCount = s.bootCount();
         link.bootCount(bootCount);
         cursor.sequence = s.nextSequence();
         cursor.sampleIndex = s.nextSample();
-        reader = new FetchRead(link, inbox, cursor, count, settings.blockSamples(), () -> outputOn);
+        reader = new FetchRead(link, inbox, cursor, channels.size(), settings.blockSamples(), () -> outputOn);
     }
 
     @Override

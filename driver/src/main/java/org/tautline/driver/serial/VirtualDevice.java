@@ -2,15 +2,12 @@ package org.tautline.driver.serial;
 
 import java.nio.charset.StandardCharsets;
 import java.util.ArrayDeque;
-import java.util.LinkedHashMap;
-import java.util.Map;
 
 import org.tautline.driver.RigException;
 import org.tautline.driver.sim.SensorSetup;
 import org.tautline.driver.sim.SimulatedRig;
 import org.tautline.driver.sim.SimulationConfig;
 import org.tautline.driver.spi.ChannelInfo;
-import org.tautline.driver.spi.SampleBlock;
 
 /**
  * The device side of PROTOCOL.md over a {@link SimulatedRig}: runs command lines as they arrive, keeps the error
@@ -27,8 +24,6 @@ final class VirtualDevice {
     static final int PROTOCOL_MAX = 2;
     /** Error queue length; IEEE 488.2 / SCPI-1999 replace the newest entry by -350 on overflow (from memory). */
     static final int ERROR_QUEUE_LENGTH = 16;
-    /** Blocks kept for {@code ACQ:RESEND?}. */
-    static final int HISTORY_BLOCKS = 64;
     /** Default watchdog, ms. */
     static final int DEFAULT_WATCHDOG_MS = 2000;
     /** Default samples per channel per block. */
@@ -49,9 +44,8 @@ final class VirtualDevice {
     private SimulatedRig rig;
     private int bootCount;
     private final ArrayDeque<DeviceError> errors = new ArrayDeque<>();
-    private final Map<Long, byte[]> history = new LinkedHashMap<>();
     private final ArrayDeque<DeviceOutbox.FetchJob> fetches = new ArrayDeque<>();
-    private long nextSequence;
+    private final BlockHistory blocks;
     private SampleFormat format = SampleFormat.FLOAT32_LE;
     private int blockSamples = DEFAULT_BLOCK_SAMPLES;
     private int watchdogMs = DEFAULT_WATCHDOG_MS;
@@ -76,6 +70,7 @@ final class VirtualDevice {
         double counts = Math.pow(2, s.adcBits() - 1);
         this.sensitivity = new double[] {s.forceFullScale() / counts, s.responseFullScale() / counts};
         this.rig = new SimulatedRig(config);
+        this.blocks = new BlockHistory(sensitivity);
     }
 
     /** Forgets everything as a power cycle would, then announces it with {@code !RESET <boot count>}. */
@@ -87,8 +82,7 @@ final class VirtualDevice {
         rig = new SimulatedRig(config);
         bootCount++;
         errors.clear();
-        history.clear();
-        nextSequence = 0;
+        blocks.reset();
         format = SampleFormat.FLOAT32_LE;
         blockSamples = DEFAULT_BLOCK_SAMPLES;
         watchdogMs = DEFAULT_WATCHDOG_MS;
@@ -133,7 +127,7 @@ final class VirtualDevice {
 
     /** Forgets the blocks kept for resends, as a device with a small buffer would. */
     synchronized void forgetHistory() {
-        history.clear();
+        blocks.forget();
     }
 
     /** Checks the watchdog; call often. @param nowNs {@link System#nanoTime()} */
@@ -171,7 +165,7 @@ final class VirtualDevice {
             log.add("event", "stream overrun: samples " + first + ".." + (first + blockSamples - 1) + " dropped");
             return;
         }
-        outbox.sendStreamBlock(makeBlock(blockSamples, format));
+        outbox.sendStreamBlock(blocks.make(rig.acquisition(), blockSamples, format));
     }
 
     /**
@@ -185,7 +179,7 @@ final class VirtualDevice {
             return null;
         }
         int n = Math.min(job.blockSamples, job.remaining);
-        byte[] b = makeBlock(n, job.format);
+        byte[] b = blocks.make(rig.acquisition(), n, job.format);
         job.remaining -= n;
         if (job.done()) {
             fetches.remove(job);
@@ -208,7 +202,7 @@ final class VirtualDevice {
     }
 
     private long sequenceAfterFetches() {
-        long s = nextSequence;
+        long s = blocks.nextSequence();
         for (DeviceOutbox.FetchJob j : fetches) {
             s += (j.remaining + j.blockSamples - 1) / j.blockSamples;
         }
@@ -394,26 +388,13 @@ final class VirtualDevice {
 
     /** @return false when block seq is no longer kept */
     boolean resend(long seq) {
-        byte[] b = history.get(seq);
+        byte[] b = blocks.get(seq);
         if (b == null) {
             return false;
         }
         log.add("event", "resend block " + seq);
         outbox.send(b);
         return true;
-    }
-
-    private byte[] makeBlock(int n, SampleFormat f) {
-        long first = rig.acquisition().nextSampleIndex();
-        SampleBlock s = rig.acquisition().read(n);
-        long seq = nextSequence;
-        nextSequence = (nextSequence + 1) & 0xFFFFFFFFL;
-        byte[] bytes = BlockCodec.encode(new DataBlock(seq, first, f, s.samples()), sensitivity);
-        history.put(seq, bytes);
-        if (history.size() > HISTORY_BLOCKS) {
-            history.remove(history.keySet().iterator().next());
-        }
-        return bytes;
     }
 
     /** @return channel i */

@@ -4,7 +4,6 @@ import java.nio.charset.StandardCharsets;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicLong;
-import java.util.concurrent.locks.LockSupport;
 import java.util.function.Supplier;
 
 import org.tautline.driver.RigLinkException;
@@ -33,7 +32,7 @@ public final class VirtualRigServer implements AutoCloseable {
     private final Thread sender;
     private final Thread worker;
     private final AtomicLong itemsSent = new AtomicLong();
-    private long pacedUntilNs;
+    private final PacedWriter paced;
     private volatile boolean closed;
 
     private VirtualRigServer(SimulationConfig config, SerialTransport transport, PtyPair ownedPair,
@@ -42,6 +41,7 @@ public final class VirtualRigServer implements AutoCloseable {
         this.ownedPair = ownedPair;
         this.settings = settings;
         this.log = log;
+        this.paced = settings.paced() ? new PacedWriter(transport, settings.baud()) : null;
         this.device = new VirtualDevice(config, outbox, log);
         this.sender = new Thread(this::sendLoop, "virtual-rig sender " + transport.port());
         this.worker = new Thread(this::workLoop, "virtual-rig worker " + transport.port());
@@ -335,24 +335,11 @@ public final class VirtualRigServer implements AutoCloseable {
         return (byte[]) o;
     }
 
-    /** Writes, at most at the line's byte rate when paced (chunks of about 1 ms, at most 2 ms of catching up). */
     private void write(byte[] b) {
-        if (!settings.paced()) {
+        if (paced == null) {
             transport.write(b);
-            return;
-        }
-        double bytesPerS = LinkBudget.capacityBytesPerS(settings.baud());
-        int chunk = (int) Math.max(1, bytesPerS / 1000);
-        for (int off = 0; off < b.length; off += chunk) {
-            int n = Math.min(chunk, b.length - off);
-            long now = System.nanoTime();
-            pacedUntilNs = Math.max(pacedUntilNs, now - 2_000_000L);
-            while (pacedUntilNs > now) {
-                LockSupport.parkNanos(pacedUntilNs - now);
-                now = System.nanoTime();
-            }
-            transport.write(b, off, n);
-            pacedUntilNs += (long) (n * 1e9 / bytesPerS);
+        } else {
+            paced.write(b);
         }
     }
 
