@@ -29,7 +29,8 @@ import org.tautline.analysis.AnalysisException;
  *
  * @param outcome the overall outcome
  * @param results one result per limit, in the specification's order
- * @param reasons one plain sentence per limit, in the same order
+ * @param reasons plain sentences: first why no verdict could be reached, when that is so (see
+ *        {@link #undetermined(String)}), then one per limit in the order of {@code results}
  */
 public record Verdict(Outcome outcome, List<LimitResult> results, List<String> reasons) {
 
@@ -76,6 +77,24 @@ public record Verdict(Outcome outcome, List<LimitResult> results, List<String> r
         }
         Outcome overall = anyFail ? Outcome.FAIL : anyUndecided ? Outcome.NOT_DETERMINABLE : Outcome.PASS;
         return new Verdict(overall, results, reasons);
+    }
+
+    /**
+     * The verdict made NOT_DETERMINABLE whatever the figures say, because the measurement they come from cannot be
+     * trusted to be complete (a sweep stopped before its end, a fit that could not explain the data). The limit
+     * results stay as they are, for the record; the reason comes first.
+     *
+     * @param why what makes the measurement untrustworthy, in one plain sentence
+     * @return the verdict
+     */
+    public Verdict undetermined(String why) {
+        if (why == null || why.isBlank()) {
+            throw new AnalysisException("a verdict made not determinable needs the reason, got none");
+        }
+        List<String> all = new ArrayList<>();
+        all.add(why);
+        all.addAll(reasons);
+        return new Verdict(Outcome.NOT_DETERMINABLE, results, all);
     }
 
     private static LimitResult check(Limit limit, Measurement measurement) {

@@ -26,6 +26,22 @@ class VerdictTest {
     }
 
     @Test
+    void aMeasurementThatCannotBeTrustedGivesNoVerdictWhateverTheFiguresSay() {
+        Verdict pass = Verdict.evaluate(new Specification("wire W-1", List.of(TENSION)),
+                Map.of("tensionN", new Measurement(151.2, 0.4, "N")));
+        Verdict undetermined = pass.undetermined("not determinable: the sweep stopped before its end");
+        assertEquals(Outcome.NOT_DETERMINABLE, undetermined.outcome());
+        assertEquals(List.of("not determinable: the sweep stopped before its end",
+                "tensionN = 151.2 ± 0.8 N (k = 2) meets 140 .. 160 N (margin 8.8 N)"), undetermined.reasons());
+        assertEquals(pass.results(), undetermined.results(), "the limit results are kept for the record");
+        Verdict fail = Verdict.evaluate(new Specification("wire W-1", List.of(TENSION)),
+                Map.of("tensionN", new Measurement(135, 1, "N")));
+        assertEquals(Outcome.NOT_DETERMINABLE, fail.undetermined("the fit missed modes").outcome(),
+                "a FAIL from an untrustworthy measurement is not confident either");
+        assertThrows(AnalysisException.class, () -> pass.undetermined(" "));
+    }
+
+    @Test
     void failsWhenTheUncertaintyIntervalLiesWhollyOutside() {
         Verdict verdict = Verdict.evaluate(new Specification("wire W-1", List.of(TENSION)),
                 Map.of("tensionN", new Measurement(135, 1, "N")));

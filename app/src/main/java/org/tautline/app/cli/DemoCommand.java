@@ -14,7 +14,7 @@ import org.tautline.app.qualify.DemoOutcome;
 import org.tautline.app.qualify.DemoRun;
 import org.tautline.app.qualify.DemoScenario;
 import org.tautline.app.qualify.ResultText;
-import org.tautline.driver.sweep.SweepListener;
+import org.tautline.app.qualify.SweepStoppedException;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
@@ -53,9 +53,17 @@ final class DemoCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         System.err.print(SafetyNotice.asText(true));
         System.err.flush();
-        SweepListener progress = noProgress ? SweepListener.NONE
-                : new ProgressBar(System.err, System.console() != null).sweep();
-        DemoOutcome outcome = DemoRun.run(progress, () -> Thread.currentThread().isInterrupted());
+        DemoOutcome outcome;
+        try (SignalStop stop = new SignalStop()) {
+            outcome = DemoRun.run(SweepCommand.progress(noProgress), stop.control());
+        } catch (SweepStoppedException e) {
+            System.err.println("tautline: " + e.getMessage());
+            return switch (e.sweep().status()) {
+                case LIMIT -> ExitCodes.SWEEP_LIMIT;
+                case FAULT -> ExitCodes.SWEEP_FAULT;
+                default -> ExitCodes.SWEEP_STOPPED;
+            };
+        }
         if (json) {
             out.println(ResultJson.MAPPER.writeValueAsString(ResultJson.outcome(outcome)));
         } else {

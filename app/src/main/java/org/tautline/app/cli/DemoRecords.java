@@ -19,7 +19,7 @@ import org.tautline.app.report.RunDirectory;
 import org.tautline.driver.sim.SensorSetup;
 import org.tautline.driver.sim.ShakerModel;
 import org.tautline.driver.sim.SimulationConfig;
-import org.tautline.driver.sweep.SteppedSinePlan;
+import org.tautline.driver.sweep.SweepPlan;
 
 /** The demo's records: the rig lines of its FRF file, its report, and its entry in the lot register. */
 final class DemoRecords {
@@ -31,7 +31,7 @@ final class DemoRecords {
         SimulationConfig sim = DemoScenario.simulation();
         ShakerModel shaker = sim.shaker();
         SensorSetup sensors = sim.sensors();
-        SteppedSinePlan plan = DemoScenario.plan();
+        SweepPlan plan = DemoScenario.plan();
         Map<String, String> m = new LinkedHashMap<>();
         m.put("rig", "simulated rig (invented), sample rate " + fmt(sim.sampleRateHz()) + " Hz");
         m.put("exciter", String.format(Locale.ROOT, "electrodynamic model: moving mass %s kg, force constant %s N/A, coil %s ohm",

@@ -4,8 +4,9 @@ import java.io.PrintStream;
 import java.util.Locale;
 
 import org.tautline.analysis.ProgressListener;
-import org.tautline.driver.sweep.SweepListener;
-import org.tautline.driver.sweep.SweepProgress;
+import org.tautline.driver.sweep.SweepEvent;
+import org.tautline.driver.sweep.SweepEventListener;
+import org.tautline.driver.sweep.WallTimeEstimate;
 
 /**
  * A one-line text progress bar with ETA, written to a stream (normally standard error).
@@ -30,9 +31,15 @@ final class ProgressBar {
         this.interactive = interactive;
     }
 
-    /** @return a sweep listener drawing step, frequency, rig time and the sweep's own ETA */
-    SweepListener sweep() {
-        return p -> draw(p.fraction(), p.completedSteps() == p.totalSteps(), line(p));
+    /** @return a sweep listener drawing, after every completed step, the pass, step, frequency, rig time and ETA */
+    SweepEventListener sweep() {
+        WallTimeEstimate eta = new WallTimeEstimate();
+        return e -> {
+            if (e.completed()) {
+                boolean last = e.pass() == e.passCount() - 1 && e.stepNumber() >= e.plannedSteps();
+                draw(e.fraction(), last, line(e, eta.remainingWallS(e)));
+            }
+        };
     }
 
     /**
@@ -75,9 +82,11 @@ final class ProgressBar {
         out.flush();
     }
 
-    static String line(SweepProgress p) {
-        return String.format(Locale.ROOT, "%s  step %d/%d  %8.2f Hz  rig %6.1f s  %s", bar(p.fraction()),
-                p.completedSteps(), p.totalSteps(), p.frequencyHz(), p.rigTimeS(), eta(p.remainingWallTimeS()));
+    static String line(SweepEvent e, double remainingWallS) {
+        String pass = e.passCount() > 1 ? String.format(Locale.ROOT, "pass %d/%d  ", e.pass() + 1, e.passCount()) : "";
+        return String.format(Locale.ROOT, "%s  %sstep %d/%d  %8.2f Hz  rig %6.1f s  %s", bar(e.fraction()), pass,
+                e.stepNumber(), Math.max(e.stepNumber(), e.plannedSteps()), e.frequencyHz(), e.rigTimeS(),
+                eta(remainingWallS));
     }
 
     private static String bar(double fraction) {

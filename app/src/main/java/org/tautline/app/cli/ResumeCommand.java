@@ -7,6 +7,7 @@ import java.nio.file.Path;
 import java.time.Clock;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.concurrent.Callable;
 
 import org.tautline.app.SafetyNotice;
@@ -14,7 +15,7 @@ import org.tautline.driver.journal.JournalContents;
 import org.tautline.driver.journal.JournalReader;
 import org.tautline.driver.journal.JournaledSweep;
 import org.tautline.driver.spi.RigDrivers;
-import org.tautline.driver.sweep.SweepRecord;
+import org.tautline.driver.sweep.SweepResult;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Mixin;
@@ -24,14 +25,27 @@ import picocli.CommandLine.Spec;
 
 /** {@code tautline resume RUNDIR}: continues an interrupted sweep from its journal to the same result. */
 @Command(name = "resume", mixinStandardHelpOptions = true,
-        description = "Continue an interrupted sweep: reopen the rig recorded in RUNDIR/journal, run only the steps not"
-                + " yet done, append them to the journal and write RUNDIR/frf.csv.")
+        description = "Continue an interrupted sweep: reopen the rig recorded in RUNDIR/journal (checking that it is the"
+                + " same rig), take over the completed steps, run the rest under the same plan and limits, append them to"
+                + " the journal and write RUNDIR/frf.csv.",
+        exitCodeListHeading = "%nExit status:%n",
+        exitCodeList = {"0:the sweep ran to its end", "1:an error; nothing was excited",
+                "3:the sweep was stopped again", "4:a safety limit stopped the sweep",
+                "5:a rig or link fault stopped the sweep", "130/143:interrupted by Ctrl-C / kill, output off"})
 final class ResumeCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
 
     @Parameters(index = "0", paramLabel = "RUNDIR", description = "The run folder a 'tautline sweep --out' made.")
     private Path runDir;
+
+    @Option(names = "--port", paramLabel = "PATH",
+            description = "The serial port the rig answers on now, when it came back under another name.")
+    private String port;
+
+    @Option(names = "--option", paramLabel = "KEY=VALUE",
+            description = "A rig driver option to use instead of the recorded one (repeatable).")
+    private List<String> options = new ArrayList<>();
 
     @Option(names = "--json", description = "Print a summary as JSON on standard output.")
     private boolean json;
@@ -50,15 +64,20 @@ final class ResumeCommand implements Callable<Integer> {
             throw new IllegalArgumentException(runDir + " holds no journal (" + journal + "); give the folder a"
                     + " 'tautline sweep --out' made");
         }
+        Map<String, String> changes = SweepCommand.parseOptions(options);
+        if (port != null) {
+            changes.put("port", port);
+        }
         RigDrivers drivers = plugins.drivers(err);
         JournalContents contents = JournalReader.read(journal);
-        if (!contents.allStepsDone()) {
+        if (!contents.finished()) {
             err.print(SafetyNotice.asText("sim".equals(contents.header().driver())));
             err.flush();
         }
-        SweepRecord record = SweepCommand.runInterruptibly(cancel -> JournaledSweep.resume(drivers, journal,
-                notice -> err.println("tautline: " + notice), SweepCommand.progress(noProgress), cancel,
-                Clock.systemUTC()), runDir, err);
-        return SweepCommand.finish(record, runDir, json, spec.commandLine().getOut(), err);
+        try (SignalStop stop = new SignalStop()) {
+            SweepResult result = JournaledSweep.resume(drivers, journal, changes, notice -> err.println("tautline: "
+                    + notice), SweepCommand.progress(noProgress), stop.control(), Clock.systemUTC());
+            return SweepReport.finish(result, runDir, json, spec.commandLine().getOut(), err);
+        }
     }
 }

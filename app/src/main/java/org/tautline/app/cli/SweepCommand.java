@@ -8,36 +8,31 @@ import java.time.Clock;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
-import java.util.concurrent.CountDownLatch;
-import java.util.concurrent.TimeUnit;
-import java.util.concurrent.atomic.AtomicBoolean;
-import java.util.function.BooleanSupplier;
-import java.util.function.Function;
 
-import com.fasterxml.jackson.databind.node.ObjectNode;
-import org.tautline.analysis.frf.FrfCsvWriter;
 import org.tautline.app.SafetyNotice;
-import org.tautline.driver.journal.JournalHeader;
-import org.tautline.driver.journal.JournalReader;
 import org.tautline.driver.journal.JournaledSweep;
 import org.tautline.driver.spi.RigDrivers;
-import org.tautline.driver.sweep.SteppedSinePlan;
-import org.tautline.driver.sweep.SweepFaultException;
-import org.tautline.driver.sweep.SweepListener;
-import org.tautline.driver.sweep.SweepRecord;
+import org.tautline.driver.sweep.SafetyLimits;
+import org.tautline.driver.sweep.SweepEventListener;
+import org.tautline.driver.sweep.SweepPlan;
+import org.tautline.driver.sweep.SweepResult;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
-/** {@code tautline sweep}: a journaled stepped-sine sweep on any rig, writing the journal and the FRF. */
+/** {@code tautline sweep}: a journaled stepped-sine sweep on any rig, uniform or from a plan file. */
 @Command(name = "sweep", mixinStandardHelpOptions = true,
         description = "Run a stepped-sine sweep on a rig, journaling every step to RUNDIR/journal and writing"
-                + " RUNDIR/frf.csv. An interrupted run continues with 'tautline resume RUNDIR'.")
+                + " RUNDIR/frf.csv. An interrupted run continues with 'tautline resume RUNDIR'.",
+        exitCodeListHeading = "%nExit status:%n",
+        exitCodeList = {"0:the sweep ran to its end", "1:an error; nothing was excited",
+                "3:the sweep was stopped; resume continues it", "4:a safety limit stopped the sweep",
+                "5:a rig or link fault stopped the sweep; resume continues it",
+                "130/143:interrupted by Ctrl-C / kill, after the output was switched off"})
 final class SweepCommand implements Callable<Integer> {
     /** Journal file name inside a run folder. */
     static final String JOURNAL = "journal";
@@ -64,8 +59,9 @@ final class SweepCommand implements Callable<Integer> {
     private int steps;
 
     @Option(names = "--plan", paramLabel = "PLAN.json",
-            description = "Run the adaptive engine with this sweep plan (driver/SWEEP_PLAN.md) instead of a uniform"
-                    + " sweep; --from, --to, --steps, --settle-cycles, --cycles and --drive are then not used.")
+            description = "Run this sweep plan (driver/SWEEP_PLAN.md), adaptive or uniform, instead of a uniform sweep"
+                    + " from the options; --from, --to, --steps, --settle-cycles, --cycles, --drive, --ramp and the"
+                    + " --max options are then not used (the plan holds its own limits).")
     private Path planFile;
 
     @Option(names = "--settle-cycles", paramLabel = "C", defaultValue = "250",
@@ -83,6 +79,25 @@ final class SweepCommand implements Callable<Integer> {
     @Option(names = "--ramp", paramLabel = "S", defaultValue = "0.2",
             description = "Drive ramp time at the start and the end, s (default ${DEFAULT-VALUE}).")
     private double rampS;
+
+    @Option(names = "--max-drive", paramLabel = "V",
+            description = "Safety limit: the drive is never commanded above it, V (default: the --drive level).")
+    private Double maxDriveV;
+
+    @Option(names = "--max-force", paramLabel = "N", defaultValue = "2.0",
+            description = "Safety limit: peak force; the sweep ramps down and stops on the first block that reaches it,"
+                    + " N (default ${DEFAULT-VALUE}).")
+    private double maxForceN;
+
+    @Option(names = "--max-displacement", paramLabel = "M", defaultValue = "0.001",
+            description = "Safety limit: peak displacement of the specimen at the response sensor, m (default"
+                    + " ${DEFAULT-VALUE}).")
+    private double maxDisplacementM;
+
+    @Option(names = "--max-response", paramLabel = "X",
+            description = "Safety limit: peak of the response channel in its own unit (m, m/s or m/s^2), for example"
+                    + " the sensor's range (default: none beyond --max-displacement).")
+    private Double maxResponse;
 
     @Option(names = "--keep-samples", description = "Also keep every step's integration samples in RUNDIR/journal.samples.")
     private boolean keepSamples;
@@ -108,14 +123,7 @@ final class SweepCommand implements Callable<Integer> {
             given.put("port", rig.substring("serial:".length()));
         }
         RigDrivers drivers = plugins.drivers(err);
-        if (planFile != null) {
-            return AdaptiveSweepCommand.run(drivers, driver, given, SweepPlanFile.read(planFile), runDir, json,
-                    noProgress, spec.commandLine().getOut(), err);
-        }
-        if (steps == 0) {
-            throw new IllegalArgumentException("--from, --to and --steps are required unless --plan is given");
-        }
-        SteppedSinePlan plan = new SteppedSinePlan(fromHz, toHz, steps, settleCycles, 0.02, cycles, driveV, rampS, 3);
+        SweepPlan plan = planFile != null ? SweepPlanFile.read(planFile) : uniformPlan();
         drivers.find(driver);
         Path journal = runDir.resolve(JOURNAL);
         if (Files.exists(journal)) {
@@ -125,13 +133,24 @@ final class SweepCommand implements Callable<Integer> {
         Files.createDirectories(runDir);
         err.print(SafetyNotice.asText("sim".equals(driver)));
         err.flush();
-        SweepRecord record = runInterruptibly(cancel -> JournaledSweep.run(drivers, driver, given, plan, journal,
-                keepSamples, progress(noProgress), cancel, Clock.systemUTC()), runDir, err);
-        return finish(record, runDir, json, spec.commandLine().getOut(), err);
+        try (SignalStop stop = new SignalStop()) {
+            SweepResult result = JournaledSweep.run(drivers, driver, given, plan, journal, keepSamples,
+                    progress(noProgress), stop.control(), Clock.systemUTC());
+            return SweepReport.finish(result, runDir, json, spec.commandLine().getOut(), err);
+        }
     }
 
-    static SweepListener progress(boolean noProgress) {
-        return noProgress ? SweepListener.NONE : new ProgressBar(System.err, System.console() != null).sweep();
+    private SweepPlan uniformPlan() {
+        if (steps == 0) {
+            throw new IllegalArgumentException("--from, --to and --steps are required unless --plan is given");
+        }
+        SafetyLimits limits = new SafetyLimits(maxDriveV == null ? driveV : maxDriveV, maxForceN,
+                maxResponse == null ? Double.POSITIVE_INFINITY : maxResponse, maxDisplacementM);
+        return SweepPlan.uniform(fromHz, toHz, steps, settleCycles, 0.02, cycles, driveV, rampS, 3, limits);
+    }
+
+    static SweepEventListener progress(boolean noProgress) {
+        return noProgress ? SweepEventListener.NONE : new ProgressBar(System.err, System.console() != null).sweep();
     }
 
     static Map<String, String> parseOptions(List<String> options) {
@@ -144,75 +163,5 @@ final class SweepCommand implements Callable<Integer> {
             map.put(option.substring(0, eq), option.substring(eq + 1));
         }
         return map;
-    }
-
-    /**
-     * Runs a sweep so that an interrupt (Ctrl-C) cancels it: the drive ramps down, the output goes off
-     * and the journal records the cancel before the process ends. A fault is reported with the way on.
-     */
-    static <T> T runInterruptibly(Function<BooleanSupplier, T> sweep, Path runDir, PrintWriter err) {
-        AtomicBoolean cancel = new AtomicBoolean();
-        CountDownLatch done = new CountDownLatch(1);
-        Thread hook = new Thread(() -> {
-            cancel.set(true);
-            try {
-                done.await(30, TimeUnit.SECONDS);
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-            }
-        }, "tautline-sweep-cancel");
-        Runtime.getRuntime().addShutdownHook(hook);
-        try {
-            return sweep.apply(cancel::get);
-        } catch (SweepFaultException e) {
-            throw new IllegalStateException(e.getMessage() + ". The journal " + runDir.resolve(JOURNAL)
-                    + " keeps them; continue with 'tautline resume " + runDir + "' once the rig is fixed", e);
-        } finally {
-            done.countDown();
-            try {
-                Runtime.getRuntime().removeShutdownHook(hook);
-            } catch (IllegalStateException shuttingDown) {
-                // The process is ending: the hook is running and has just been released.
-            }
-        }
-    }
-
-    /** Writes frf.csv for a complete sweep and prints the summary; an incomplete one says how to go on. */
-    static int finish(SweepRecord record, Path runDir, boolean json, PrintWriter out, PrintWriter err) throws IOException {
-        Path journal = runDir.resolve(JOURNAL);
-        JournalHeader header = JournalReader.read(journal).header();
-        int total = record.plan().stepCount();
-        if (record.completed()) {
-            Map<String, String> metadata = new LinkedHashMap<>();
-            metadata.put("source", "Tautline stepped-sine sweep");
-            metadata.put("rig", header.identity());
-            metadata.put("steps", Integer.toString(total));
-            FrfCsvWriter.write(record.toFrf(), metadata, runDir.resolve(FRF));
-        }
-        if (json) {
-            ObjectNode node = ResultJson.MAPPER.createObjectNode();
-            node.put("completed", record.completed());
-            node.put("steps", record.points().size());
-            node.put("plannedSteps", total);
-            node.put("rigTimeS", record.rigTimeS());
-            node.put("driver", header.driver());
-            node.put("rigIdentity", header.identity());
-            node.put("journal", journal.toString());
-            if (record.completed()) {
-                node.put("frf", runDir.resolve(FRF).toString());
-            } else {
-                node.putNull("frf");
-            }
-            out.println(ResultJson.MAPPER.writeValueAsString(node));
-        } else if (record.completed()) {
-            out.println(String.format(Locale.ROOT, "sweep complete: %d of %d steps, rig time %.1f s; wrote %s and %s",
-                    record.points().size(), total, record.rigTimeS(), journal, runDir.resolve(FRF)));
-        } else {
-            out.println("sweep cancelled after " + record.points().size() + " of " + total + " steps; continue it with"
-                    + " 'tautline resume " + runDir + "'");
-        }
-        out.flush();
-        err.flush();
-        return record.completed() ? 0 : 1;
     }
 }

@@ -1,7 +1,6 @@
 package org.tautline.app.qualify;
 
 import java.util.Optional;
-import java.util.function.BooleanSupplier;
 
 import org.tautline.analysis.specimen.LinearityResult;
 import org.tautline.analysis.specimen.Specimen;
@@ -9,10 +8,12 @@ import org.tautline.analysis.verdict.Specification;
 import org.tautline.driver.sim.SimulatedRig;
 import org.tautline.driver.sim.SimulationConfig;
 import org.tautline.driver.sim.SimulationTruth;
-import org.tautline.driver.sweep.SteppedSinePlan;
-import org.tautline.driver.sweep.SteppedSineRunner;
-import org.tautline.driver.sweep.SweepListener;
-import org.tautline.driver.sweep.SweepRecord;
+import org.tautline.driver.sweep.SweepControl;
+import org.tautline.driver.sweep.SweepEngine;
+import org.tautline.driver.sweep.SweepEventListener;
+import org.tautline.driver.sweep.SweepJournal;
+import org.tautline.driver.sweep.SweepPlan;
+import org.tautline.driver.sweep.SweepResult;
 
 /** Runs a qualification on the simulated rig: the demo, or any simulated specimen. */
 public final class DemoRun {
@@ -22,13 +23,13 @@ public final class DemoRun {
     /**
      * Sweeps the demo wire and analyses it.
      *
-     * @param listener progress after every step (called on the calling thread)
-     * @param cancelRequested polled during the sweep; true ramps the drive down and stops
+     * @param listener progress events (called on the calling thread)
+     * @param control stop requests; a stop ramps the drive down and ends the run
      * @return the result and the simulated truth
      */
-    public static DemoOutcome run(SweepListener listener, BooleanSupplier cancelRequested) {
+    public static DemoOutcome run(SweepEventListener listener, SweepControl control) {
         return run(DemoScenario.simulation(), DemoScenario.specimen(), DemoScenario.plan(), DemoScenario.specification(),
-                listener, cancelRequested);
+                listener, control);
     }
 
     /**
@@ -39,22 +40,24 @@ public final class DemoRun {
      * @param stated what the technician states about the specimen
      * @param plan the sweep
      * @param specification the limits
-     * @param listener progress after every step
-     * @param cancelRequested polled during the sweep
+     * @param listener progress events of the main sweep
+     * @param control stop requests, for the main sweep and the level check
      * @return the result and the simulated truth
+     * @throws SweepStoppedException when the sweep ended before its end (a stop, a safety limit): nothing is qualified
      */
-    public static DemoOutcome run(SimulationConfig simulation, Specimen stated, SteppedSinePlan plan,
-                                  Specification specification, SweepListener listener, BooleanSupplier cancelRequested) {
+    public static DemoOutcome run(SimulationConfig simulation, Specimen stated, SweepPlan plan,
+                                  Specification specification, SweepEventListener listener, SweepControl control) {
         long startNs = System.nanoTime();
         try (SimulatedRig rig = new SimulatedRig(simulation)) {
             SimulationTruth truth = rig.truth();
-            SweepRecord sweep = new SteppedSineRunner(rig).run(plan, listener, cancelRequested);
+            SweepResult sweep = new SweepEngine(rig).run(plan, listener, control, SweepJournal.NONE);
+            if (!sweep.completed()) {
+                throw new SweepStoppedException(sweep);
+            }
             QualificationResult result = Qualification.analyse(stated, sweep, specification, startNs);
-            if (sweep.completed()) {
-                Optional<LinearityResult> linearity = LevelCheck.run(rig, result, plan, SweepListener.NONE, cancelRequested);
-                if (linearity.isPresent()) {
-                    result = Qualification.withLinearity(result, linearity.get(), Optional.of(specification));
-                }
+            Optional<LinearityResult> linearity = LevelCheck.run(rig, result, plan, SweepEventListener.NONE, control);
+            if (linearity.isPresent()) {
+                result = Qualification.withLinearity(result, linearity.get(), Optional.of(specification));
             }
             return new DemoOutcome(result, truth);
         }

@@ -9,7 +9,8 @@ import org.tautline.analysis.verdict.Limit;
 import org.tautline.analysis.verdict.Specification;
 import org.tautline.driver.sim.SimulationConfig;
 import org.tautline.driver.sim.SimulationConfigs;
-import org.tautline.driver.sweep.SteppedSinePlan;
+import org.tautline.driver.sweep.SafetyLimits;
+import org.tautline.driver.sweep.SweepPlan;
 
 /**
  * The built-in demo: an invented tie wire, its stated setup, its specification and its sweep plan.
@@ -65,9 +66,19 @@ public final class DemoScenario {
      * cycles), then 100 whole cycles are fitted, enough to hold the FRF's standard error near 2 %
      * at the resonances, where the force drops to a fraction of a millinewton per volt.
      *
+     * <p>The safety limits leave room for the level check at three times the drive ({@link LevelCheck}):
+     * the drive never above 5 V, the force below 2 N (the demo's largest is about 0.3 N, off resonance), the
+     * response below 1.8 mm, 90 % of the displacement sensor's 2 mm full scale, and the wire's motion at the sensor
+     * below 1.5 mm (the fundamental moves it about 41 micrometres per volt; the largest motion of the sweep, about
+     * 1 mm at 1 V, is near 262 Hz, where the shaker's moving mass on its stinger resonates with the wire).
+     *
      * @return the plan
      */
-    public static SteppedSinePlan plan() {
-        return new SteppedSinePlan(180.0, 1500.0, 1061, 250, 0.02, 100, SimulationConfigs.DEMO_DRIVE_V, 0.2, 3);
+    public static SweepPlan plan() {
+        return SweepPlan.uniform(180.0, 1500.0, 1061, 250, 0.02, 100, SimulationConfigs.DEMO_DRIVE_V, 0.2, 3,
+                LIMITS);
     }
+
+    /** The demo's safety limits: drive 5 V, force 2 N, response 1.8 mm, displacement 1.5 mm; see {@link #plan()}. */
+    public static final SafetyLimits LIMITS = new SafetyLimits(5.0, 2.0, 1.8e-3, 1.5e-3);
 }

@@ -52,6 +52,32 @@ public final class JsonFields {
         return where;
     }
 
+    /**
+     * Refuses a field this object should not hold: a misspelt optional field would otherwise be ignored.
+     *
+     * @param known every field the object may hold
+     * @throws AnalysisException naming the first unknown field and the known ones
+     */
+    public void refuseUnknown(java.util.Collection<String> known) {
+        java.util.Iterator<String> names = node.fieldNames();
+        while (names.hasNext()) {
+            String name = names.next();
+            if (!known.contains(name)) {
+                throw new AnalysisException(where + ": field \"" + name + "\" is not one this file may hold; expected only "
+                        + String.join(", ", known));
+            }
+        }
+    }
+
+    /**
+     * @param field a field that is present
+     * @return its JSON text as written (for a boolean, {@code true} or {@code false})
+     */
+    public String rawText(String field) {
+        JsonNode value = node.get(field);
+        return value == null ? "null" : value.toString();
+    }
+
     public boolean has(String field) {
         return node.has(field) && !node.get(field).isNull();
     }

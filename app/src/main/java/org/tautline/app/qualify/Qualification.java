@@ -28,7 +28,7 @@ import org.tautline.analysis.specimen.TensionEstimator;
 import org.tautline.analysis.verdict.Measurement;
 import org.tautline.analysis.verdict.Specification;
 import org.tautline.analysis.verdict.Verdict;
-import org.tautline.driver.sweep.SweepRecord;
+import org.tautline.driver.sweep.SweepResult;
 
 /**
  * The analysis half of a qualification: FRF to modes, harmonics, properties and verdict.
@@ -57,7 +57,7 @@ public final class Qualification {
      * @param wallStartNs {@link System#nanoTime()} when the qualification started
      * @return the result
      */
-    public static QualificationResult analyse(Specimen specimen, SweepRecord sweep, Specification specification,
+    public static QualificationResult analyse(Specimen specimen, SweepResult sweep, Specification specification,
                                               long wallStartNs) {
         return analyse(specimen, sweep.toFrf(), Optional.of(sweep), ModalEstimator.defaults(), Optional.of(specification),
                 wallStartNs);
@@ -74,7 +74,7 @@ public final class Qualification {
      * @param wallStartNs {@link System#nanoTime()} when the qualification started
      * @return the result
      */
-    public static QualificationResult analyse(Specimen specimen, Frf frf, Optional<SweepRecord> sweep,
+    public static QualificationResult analyse(Specimen specimen, Frf frf, Optional<SweepResult> sweep,
                                               ModalEstimator estimator, Optional<Specification> specification,
                                               long wallStartNs) {
         Frf receptance = frf.toQuantity(FrfQuantity.RECEPTANCE);
@@ -104,7 +104,7 @@ public final class Qualification {
         return previous.linearity().map(l -> withLinearity(fresh, l, specification)).orElse(fresh);
     }
 
-    private static QualificationResult fromModal(Specimen specimen, Frf receptance, Optional<SweepRecord> sweep,
+    private static QualificationResult fromModal(Specimen specimen, Frf receptance, Optional<SweepResult> sweep,
                                                  ModalEstimate modal, Optional<Specification> specification,
                                                  long wallStartNs) {
         List<FittedMode> fitted = modal.modes();
@@ -127,7 +127,7 @@ public final class Qualification {
             participation = Optional.empty();
         }
         Map<String, Measurement> measured = measurements(modes, tension, participation, modal, receptance);
-        Optional<Verdict> verdict = specification.map(spec -> Verdict.evaluate(spec, measured));
+        Optional<Verdict> verdict = judge(specification, measured, sweep);
         Frf synthesized = ModalSynthesis.synthesize(modal.plainModes(), receptance.frequenciesHz(), FrfQuantity.RECEPTANCE);
         double wallS = (System.nanoTime() - wallStartNs) * 1e-9;
         return new QualificationResult(specimen, sweep, receptance, synthesized, modal, modes, harmonics, tension,
@@ -148,10 +148,25 @@ public final class Qualification {
         Map<String, Measurement> measured = new LinkedHashMap<>(result.measurements());
         linearity.shifts().stream().filter(s -> s.harmonic() == 1).findFirst().ifPresent(s -> putKnown(measured,
                 "linearityShift1", s.relativeShift(), s.relativeShiftStd(), ""));
-        Optional<Verdict> verdict = specification.map(spec -> Verdict.evaluate(spec, measured));
+        Optional<Verdict> verdict = judge(specification, measured, result.sweep());
         return new QualificationResult(result.specimen(), result.sweep(), result.receptance(), result.synthesized(),
                 result.modal(), result.modes(), result.harmonics(), result.tension(), result.participation(),
                 Optional.of(linearity), measured, verdict, result.wallTimeS());
+    }
+
+    /**
+     * The verdict on the figures; NOT_DETERMINABLE whatever they say when they come from a sweep that stopped before
+     * its end (its FRF lacks the steps not run, so modes may be missing and the harmonic numbering wrong).
+     */
+    private static Optional<Verdict> judge(Optional<Specification> specification, Map<String, Measurement> measured,
+                                           Optional<SweepResult> sweep) {
+        Optional<Verdict> verdict = specification.map(spec -> Verdict.evaluate(spec, measured));
+        if (sweep.isPresent() && !sweep.get().completed()) {
+            String why = "not determinable: the sweep " + sweep.get().status().label() + " before its end ("
+                    + sweep.get().reason() + "), so its FRF lacks the steps not run";
+            verdict = verdict.map(v -> v.undetermined(why));
+        }
+        return verdict;
     }
 
     private static int polarisationOf(HarmonicAssignment harmonics, int modeIndex) {

@@ -12,7 +12,7 @@ import org.tautline.analysis.specimen.Specimen;
 import org.tautline.analysis.specimen.TensionEstimate;
 import org.tautline.analysis.verdict.Measurement;
 import org.tautline.analysis.verdict.Verdict;
-import org.tautline.driver.sweep.SweepRecord;
+import org.tautline.driver.sweep.SweepResult;
 
 /**
  * Everything one qualification produced, from the FRF to the verdict.
@@ -31,7 +31,7 @@ import org.tautline.driver.sweep.SweepRecord;
  * @param verdict the verdict against the specification, absent when no specification was given
  * @param wallTimeS wall-clock time of the qualification, s
  */
-public record QualificationResult(Specimen specimen, Optional<SweepRecord> sweep, Frf receptance, Frf synthesized,
+public record QualificationResult(Specimen specimen, Optional<SweepResult> sweep, Frf receptance, Frf synthesized,
                                   ModalEstimate modal, List<QualifiedMode> modes, HarmonicAssignment harmonics,
                                   Optional<TensionEstimate> tension, Optional<PatternFit> participation,
                                   Optional<LinearityResult> linearity, java.util.Map<String, Measurement> measurements, Optional<Verdict> verdict,

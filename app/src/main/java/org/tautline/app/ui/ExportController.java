@@ -19,7 +19,7 @@ import org.tautline.app.report.QualificationReport;
 import org.tautline.app.report.ReportInfo;
 import org.tautline.app.report.RunDirectory;
 import org.tautline.app.report.RunExport;
-import org.tautline.driver.sweep.SweepRecord;
+import org.tautline.driver.sweep.SweepResult;
 
 /**
  * Writes the PDF report and the CSV and JSON exports of the result on show; the writing runs off the event
@@ -92,7 +92,7 @@ final class ExportController {
     }
 
     private static Optional<String> recordedSweep(QualificationResult result) {
-        return result.sweep().map((SweepRecord s) -> String.format(java.util.Locale.ROOT,
+        return result.sweep().map((SweepResult s) -> String.format(java.util.Locale.ROOT,
                 "Sweep as run in the workbench: %d steps, rig time %.1f s, %s.", s.points().size(), s.rigTimeS(),
                 s.completed() ? "completed" : "not completed"));
     }

@@ -22,9 +22,14 @@ import org.tautline.app.ui.run.SweepSession;
 import org.tautline.app.ui.run.TappedRig;
 import org.tautline.app.ui.run.TraceBuffer;
 import org.tautline.app.ui.setup.SetupForm;
+import org.tautline.analysis.specimen.Specimen;
+import org.tautline.analysis.verdict.Specification;
 import org.tautline.driver.spi.RigDrivers;
-import org.tautline.driver.sweep.SweepProgress;
-import org.tautline.driver.sweep.SweepRecord;
+import org.tautline.driver.sweep.SweepEvent;
+import org.tautline.driver.sweep.SweepPlan;
+import org.tautline.driver.sweep.SweepResult;
+import org.tautline.driver.sweep.SweepStatus;
+import org.tautline.driver.sweep.WallTimeEstimate;
 
 /**
  * Connects the rig, runs, pauses, resumes and cancels sweeps and fits their results, all off the event thread.
@@ -42,10 +47,18 @@ final class RunController {
     private final Timer traceTimer;
     private TappedRig rig;
     private SweepSession session;
+    private Snapshot snapshot;
     private boolean running;
     private boolean safetyAcknowledged;
     private final java.util.List<Double> pendingHz = new java.util.ArrayList<>();
     private final java.util.List<Double> pendingMagnitude = new java.util.ArrayList<>();
+
+    /**
+     * What a sweep analyses, taken from the setup form on the event thread when Start is pressed: edits made during
+     * or after the sweep do not change the analysis of the sweep that ran.
+     */
+    private record Snapshot(SweepPlan plan, Specimen specimen, Specification specification) {
+    }
 
     RunController(WorkbenchParts parts, RigDrivers drivers, Consumer<QualificationResult> onResult) {
         this.parts = parts;
@@ -141,34 +154,41 @@ final class RunController {
         if (!acknowledgeSafety()) {
             return;
         }
-        session = new SweepSession(rig, form.plan());
+        snapshot = new Snapshot(form.plan(), form.specimen(), form.specification());
+        session = new SweepSession(snapshot.plan());
         parts.run().frf().clear();
-        parts.run().frf().band(form.plan().startHz(), form.plan().stopHz());
+        parts.run().frf().band(snapshot.plan().startHz(), snapshot.plan().stopHz());
         org.tautline.driver.spi.ChannelInfo response = rig.acquisition().channels().get(1);
         parts.run().traces().responseLabel("Response, " + response.quantity() + " (" + response.unit() + ")");
         parts.run().traces().clear();
         traceBuffer.clear();
         pendingHz.clear();
         pendingMagnitude.clear();
-        sweep(false, form);
+        sweep(false);
     }
 
     void pause() {
         if (running) {
-            session.requestStop(SweepSession.StopRequest.PAUSE);
+            session.requestStop(SweepSession.StopRequest.PAUSE, "paused from the run screen");
             parts.status().rig("pausing: ramping the drive down");
         }
     }
 
+    /** Goes on with a paused or interrupted sweep on the rig connected now (reconnected on a new port if need be). */
     void resume() {
-        if (!running && session != null && session.state() == SweepSession.State.PAUSED) {
-            sweep(true, parts.setup().form());
+        if (running || session == null || session.state() != SweepSession.State.PAUSED) {
+            return;
         }
+        if (rig == null) {
+            parts.status().message("Connect the rig first (on its new port if it moved), then press Resume.");
+            return;
+        }
+        sweep(true);
     }
 
     void cancel() {
         if (running) {
-            session.requestStop(SweepSession.StopRequest.CANCEL);
+            session.requestStop(SweepSession.StopRequest.CANCEL, "cancelled from the run screen");
             parts.status().rig("cancelling: ramping the drive down");
         } else if (session != null) {
             session = null;
@@ -177,12 +197,13 @@ final class RunController {
         }
     }
 
-    /** The stop control: ramps the drive down and ends the sweep, keeping nothing running. */
+    /** The stop control: ramps the drive down and ends the sweep; the completed steps are kept for Resume. */
     void stopExcitation() {
         if (running) {
-            session.requestStop(SweepSession.StopRequest.CANCEL);
+            session.requestStop(SweepSession.StopRequest.PAUSE, "stopped with the STOP control");
             parts.status().rig("STOP: ramping the drive down");
-            parts.status().message("Stop pressed: the drive ramps down and the output switches off.");
+            parts.status().message("Stop pressed: the drive ramps down and the output switches off. The completed"
+                    + " steps are kept: Resume goes on from the next step.");
         } else {
             parts.status().message("Stop: the excitation is already off.");
         }
@@ -200,39 +221,62 @@ final class RunController {
         return safetyAcknowledged;
     }
 
-    private void sweep(boolean resuming, SetupForm form) {
+    private void sweep(boolean resuming) {
+        if (resuming) {
+            // The kept steps are reported again as the engine takes them over: the live FRF is drawn anew from them.
+            pendingHz.clear();
+            pendingMagnitude.clear();
+            parts.run().frf().clear();
+            parts.run().frf().band(snapshot.plan().startHz(), snapshot.plan().stopHz());
+        }
         running = true;
         updateButtons();
         traceTimer.start();
         parts.status().rig("connected: excitation ON");
         long startNs = System.nanoTime();
         SweepSession s = session;
-        double rateHz = rig.acquisition().sampleRateHz();
-        new SwingWorker<Optional<QualificationResult>, SweepProgress>() {
+        Snapshot setup = snapshot;
+        TappedRig sweepRig = rig;
+        double rateHz = sweepRig.acquisition().sampleRateHz();
+        WallTimeEstimate eta = new WallTimeEstimate();
+        new SwingWorker<Optional<QualificationResult>, SweepEvent>() {
             @Override
             protected Optional<QualificationResult> doInBackground() {
-                SweepRecord record = resuming ? s.resume(this::publish) : s.run(this::publish);
-                if (!record.completed()) {
+                SweepResult sweep = resuming ? s.resume(sweepRig, this::publish) : s.run(sweepRig, this::publish);
+                if (!sweep.completed()) {
                     return Optional.empty();
                 }
-                QualificationResult result = Qualification.analyse(form.specimen(), record, form.specification(), startNs);
-                Optional<LinearityResult> linearity = LevelCheck.run(rig, result, form.plan(),
-                        progress -> { }, () -> s.stopRequested() != SweepSession.StopRequest.NONE);
+                QualificationResult result = Qualification.analyse(setup.specimen(), sweep, setup.specification(),
+                        startNs);
+                Optional<LinearityResult> linearity = LevelCheck.run(sweepRig, result, setup.plan(), e -> { },
+                        s.control());
                 return Optional.of(linearity.isPresent()
-                        ? Qualification.withLinearity(result, linearity.get(), Optional.of(form.specification())) : result);
+                        ? Qualification.withLinearity(result, linearity.get(), Optional.of(setup.specification()))
+                        : result);
             }
 
             @Override
-            protected void process(List<SweepProgress> steps) {
-                for (SweepProgress step : steps) {
-                    pendingHz.add(step.frequencyHz());
-                    pendingMagnitude.add(step.point().response().norm());
+            protected void process(List<SweepEvent> events) {
+                if (isDone()) {
+                    // A late batch of progress after done() has shown how the sweep ended: it must not overwrite that.
+                    return;
                 }
-                SweepProgress last = steps.get(steps.size() - 1);
-                parts.run().progress(last.fraction(), ProgressText.progress(last));
-                parts.status().progress(last.fraction(), ProgressText.eta(last.remainingWallTimeS()));
-                parts.run().settle(ProgressText.settle(form.plan(), last, rateHz));
-                if (last.completedSteps() == last.totalSteps()) {
+                SweepEvent last = null;
+                for (SweepEvent e : events) {
+                    if (e.completed()) {
+                        pendingHz.add(e.frequencyHz());
+                        pendingMagnitude.add(e.point().response().norm());
+                        last = e;
+                    }
+                }
+                if (last == null) {
+                    return;
+                }
+                double wallS = eta.remainingWallS(last);
+                parts.run().progress(last.fraction(), ProgressText.progress(last, wallS));
+                parts.status().progress(last.fraction(), ProgressText.eta(wallS));
+                parts.run().settle(ProgressText.settle(setup.plan(), last, rateHz));
+                if (last.pass() == last.passCount() - 1 && last.stepNumber() >= last.plannedSteps()) {
                     parts.status().progress(-1, "fitting the modal model");
                 }
             }
@@ -242,7 +286,7 @@ final class RunController {
                 running = false;
                 traceTimer.stop();
                 redrawLive();
-                parts.status().rig("connected: excitation off");
+                parts.status().rig(rig == null ? "not connected" : "connected: excitation off");
                 parts.status().progress(0, "idle");
                 try {
                     Optional<QualificationResult> result = get();
@@ -250,22 +294,37 @@ final class RunController {
                         parts.run().progress(1, "sweep complete");
                         onResult.accept(result.get());
                     } else if (s.state() == SweepSession.State.PAUSED) {
-                        int kept = s.partial().map(r -> r.points().size()).orElse(0);
-                        parts.run().progress(kept / (double) form.plan().stepCount(), "paused after " + kept
-                                + " steps; Resume goes on from the next step");
+                        showKept(s.partial().orElseThrow());
                     } else {
-                        parts.run().progress(0, "cancelled; the drive was ramped down");
+                        parts.run().progress(0, "cancelled; the drive was ramped down and the steps were dropped");
                     }
                 } catch (InterruptedException e) {
                     Thread.currentThread().interrupt();
                 } catch (ExecutionException e) {
-                    parts.run().progress(0, "failed");
-                    parts.status().message("The sweep failed and the excitation was switched off: "
-                            + e.getCause().getMessage());
+                    parts.run().progress(0, "could not start");
+                    parts.status().message("The sweep could not run; nothing was excited: " + e.getCause().getMessage());
                 }
                 updateButtons();
             }
         }.execute();
+    }
+
+    /** Says why a sweep stopped before its end and that its steps are kept for Resume. */
+    private void showKept(SweepResult partial) {
+        int kept = partial.steps().size();
+        double fraction = partial.passes().isEmpty() ? 0 : partial.passes().get(partial.passes().size() - 1).points().size()
+                / (double) Math.max(1, partial.plan().coarseStepCount());
+        String why = switch (partial.status()) {
+            case LIMIT -> "stopped at a safety limit (" + partial.reason() + ")";
+            case FAULT -> "stopped by a fault (" + partial.reason() + "); the output was switched off. Reconnect the rig"
+                    + " (on its new port if it moved) before resuming";
+            default -> "paused";
+        };
+        parts.run().progress(Math.min(1, fraction), why + " after " + kept
+                + " steps; the steps are kept and Resume goes on from the next one");
+        if (partial.status() == SweepStatus.FAULT || partial.status() == SweepStatus.LIMIT) {
+            parts.status().message("The sweep " + why + ".");
+        }
     }
 
     /** Fits an FRF that came from a file, off the event thread. */

@@ -42,6 +42,7 @@ final class SetupScreen {
         left.add(section(SetupField.Section.SENSORS));
         JPanel right = new JPanel(new MigLayout("insets 0, wrap 1, gapy 12"));
         right.add(section(SetupField.Section.PLAN));
+        right.add(section(SetupField.Section.SAFETY));
         right.add(limitsSection());
         panel.add(left);
         panel.add(right);

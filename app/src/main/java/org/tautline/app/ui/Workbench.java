@@ -2,16 +2,14 @@ package org.tautline.app.ui;
 
 import java.awt.BorderLayout;
 import java.awt.Color;
-import java.awt.event.ActionEvent;
+import java.awt.KeyboardFocusManager;
 import java.awt.event.InputEvent;
 import java.awt.event.KeyEvent;
 import java.awt.event.WindowAdapter;
 import java.awt.event.WindowEvent;
 
-import javax.swing.AbstractAction;
 import javax.swing.ButtonGroup;
 import javax.swing.JButton;
-import javax.swing.JComponent;
 import javax.swing.JFrame;
 import javax.swing.JLabel;
 import javax.swing.JMenu;
@@ -159,9 +157,10 @@ public final class Workbench implements WorkbenchParts {
         root.add(stopBar(), BorderLayout.NORTH);
         root.add(tabs, BorderLayout.CENTER);
         root.add(status.panel(), BorderLayout.SOUTH);
-        AbstractAction stop = action("Stop excitation", e -> runs.stopExcitation());
-        // Escape is the Stop menu item's accelerator; Ctrl+. is bound here as a second key.
-        InputMapping.bind(root, "stop", stop, KeyStroke.getKeyStroke(KeyEvent.VK_PERIOD, InputEvent.CTRL_DOWN_MASK));
+        // Escape is not a menu accelerator: an accelerator would also fire while Escape closes a menu. EscapeStop
+        // sees the key first and stops only when it closes nothing; Ctrl+. is the Stop menu item's accelerator.
+        EscapeStop escape = new EscapeStop(frame, runs::stopExcitation);
+        KeyboardFocusManager.getCurrentKeyboardFocusManager().addKeyEventDispatcher(escape);
         frame.setJMenuBar(menus());
         frame.setContentPane(root);
         frame.setDefaultCloseOperation(WindowConstants.DO_NOTHING_ON_CLOSE);
@@ -169,6 +168,11 @@ public final class Workbench implements WorkbenchParts {
             @Override
             public void windowClosing(WindowEvent e) {
                 close();
+            }
+
+            @Override
+            public void windowClosed(WindowEvent e) {
+                KeyboardFocusManager.getCurrentKeyboardFocusManager().removeKeyEventDispatcher(escape);
             }
         });
         frame.setSize(1280, 800);
@@ -224,8 +228,8 @@ public final class Workbench implements WorkbenchParts {
         rigMenu.add(item("Pause", 'P', -1, runs::pause));
         rigMenu.add(item("Resume", 'u', -1, runs::resume));
         rigMenu.add(item("Cancel sweep", 'n', -1, runs::cancel));
-        JMenuItem stop = item("Stop excitation", 'x', -1, runs::stopExcitation);
-        stop.setAccelerator(KeyStroke.getKeyStroke(KeyEvent.VK_ESCAPE, 0));
+        JMenuItem stop = item("Stop excitation (Esc)", 'x', -1, runs::stopExcitation);
+        stop.setAccelerator(KeyStroke.getKeyStroke(KeyEvent.VK_PERIOD, InputEvent.CTRL_DOWN_MASK));
         rigMenu.add(stop);
         bar.add(file);
         bar.add(view);
@@ -258,29 +262,5 @@ public final class Workbench implements WorkbenchParts {
         }
         item.addActionListener(e -> action.run());
         return item;
-    }
-
-    private static AbstractAction action(String name, java.util.function.Consumer<ActionEvent> body) {
-        return new AbstractAction(name) {
-            private static final long serialVersionUID = 1L;
-
-            @Override
-            public void actionPerformed(ActionEvent e) {
-                body.accept(e);
-            }
-        };
-    }
-
-    /** Key bindings that work wherever the focus is in the window. */
-    private static final class InputMapping {
-        private InputMapping() {
-        }
-
-        static void bind(JComponent root, String name, AbstractAction action, KeyStroke... keys) {
-            for (KeyStroke k : keys) {
-                root.getInputMap(JComponent.WHEN_IN_FOCUSED_WINDOW).put(k, name);
-            }
-            root.getActionMap().put(name, action);
-        }
     }
 }

@@ -66,8 +66,13 @@ class DemoCommandTest {
         for (int i = 0; i < fitted.get("modes").size(); i++) {
             assertEquals(root.get("modes").get(i).get("frequencyHz").asDouble(),
                     fitted.get("modes").get(i).get("frequencyHz").asDouble(), 0.0, "mode " + i);
-            assertTrue(fitted.get("modes").get(i).get("frequencyStdHz").isNumber());
-            assertTrue(fitted.get("modes").get(i).get("harmonic").asInt() > 0);
+            JsonNode mode = fitted.get("modes").get(i);
+            assertTrue(mode.get("frequencyStdHz").isNumber());
+            // Every mode whose frequency is determined to 1 % is numbered; a pole the fit cannot place (standard error
+            // of its frequency above 1 %) may stay unnumbered, and is shown as such.
+            if (mode.get("frequencyStdHz").asDouble() < 0.01 * mode.get("frequencyHz").asDouble()) {
+                assertTrue(mode.get("harmonic").asInt() > 0, "mode " + i + " is numbered: " + mode);
+            }
         }
         assertEquals(root.get("properties").get("tensionN"), fitted.get("properties").get("tensionN"));
         // From files alone there is no second test level, so only the level-shift limit cannot be judged.

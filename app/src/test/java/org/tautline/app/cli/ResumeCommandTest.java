@@ -8,7 +8,6 @@ import java.nio.file.Path;
 import java.time.Clock;
 import java.util.List;
 import java.util.Map;
-import java.util.concurrent.atomic.AtomicInteger;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -17,8 +16,10 @@ import org.tautline.analysis.frf.FrfCsvReader;
 import org.tautline.app.SafetyNotice;
 import org.tautline.driver.journal.JournaledSweep;
 import org.tautline.driver.spi.RigDrivers;
-import org.tautline.driver.sweep.SteppedSinePlan;
-import org.tautline.driver.sweep.SweepRecord;
+import org.tautline.driver.sweep.SafetyLimits;
+import org.tautline.driver.sweep.SweepControl;
+import org.tautline.driver.sweep.SweepPlan;
+import org.tautline.driver.sweep.SweepResult;
 
 /** {@code tautline resume RUNDIR} continues a cancelled sweep to the FRF an uninterrupted sweep writes. */
 class ResumeCommandTest {
@@ -28,21 +29,33 @@ class ResumeCommandTest {
         Path whole = dir.resolve("whole");
         assertEquals(0, CliRun.of(SweepCommandTest.sweep(dir, whole)).exitCode());
 
-        // The same sweep as the command runs (its plan, minimum settle 0.02 s and harmonic order 3), cancelled after 4 steps.
+        // The same sweep as the command runs (its plan, minimum settle 0.02 s, harmonic order 3 and default limits),
+        // stopped after 4 steps.
         Path cut = dir.resolve("cut");
         Files.createDirectories(cut);
-        SteppedSinePlan plan = new SteppedSinePlan(150, 300, 9, 400, 0.02, 20, 1.0, 0.02, 3);
-        AtomicInteger steps = new AtomicInteger();
-        SweepRecord partial = JournaledSweep.run(RigDrivers.load(List.of()), "sim", Map.of("scenario", "demo-wire-clean"),
-                plan, cut.resolve("journal"), false, p -> steps.incrementAndGet(), () -> steps.get() >= 4,
-                Clock.systemUTC());
+        SweepPlan plan = SweepPlan.uniform(150, 300, 9, 400, 0.02, 20, 1.0, 0.02, 3,
+                new SafetyLimits(1.0, 2.0, Double.POSITIVE_INFINITY, 0.001));
+        SweepControl control = new SweepControl();
+        SweepResult partial = JournaledSweep.run(RigDrivers.load(List.of()), "sim", Map.of("scenario", "demo-wire-clean"),
+                plan, cut.resolve("journal"), false, e -> {
+                    if (e.completed() && e.stepNumber() == 4) {
+                        control.requestStop("stopped by the test");
+                    }
+                }, control, Clock.systemUTC());
         assertEquals(4, partial.points().size());
+
+        CliRun wrongOption = CliRun.of("resume", cut.toString(), "--port", "/dev/ttyUSB9", "--no-progress",
+                "--plugins", dir.toString());
+        assertEquals(1, wrongOption.exitCode());
+        assertTrue(wrongOption.err().endsWith("tautline: the sim rig of journal " + cut.resolve("journal") + " has no"
+                + " option 'port'; its options are scenario, seed\n"), wrongOption.err());
 
         CliRun r = CliRun.of("resume", cut.toString(), "--no-progress", "--plugins", dir.toString());
         assertEquals(0, r.exitCode(), r.err());
         assertTrue(r.err().startsWith(SafetyNotice.asText(true)), r.err());
-        assertTrue(r.err().contains("tautline: resuming " + cut.resolve("journal") + " at step 5 of 9 on "), r.err());
-        assertTrue(r.out().startsWith("sweep complete: 9 of 9 steps"), r.out());
+        assertTrue(r.err().contains("tautline: resuming " + cut.resolve("journal") + " after 4 completed step(s) on "),
+                r.err());
+        assertTrue(r.out().startsWith("sweep complete: 9 steps"), r.out());
 
         Frf expected = FrfCsvReader.read(whole.resolve("frf.csv")).frf();
         Frf resumed = FrfCsvReader.read(cut.resolve("frf.csv")).frf();
@@ -55,9 +68,9 @@ class ResumeCommandTest {
             assertEquals(0.0, rel, 2e-5, "FRF line " + i);
         }
         CliRun again = CliRun.of("resume", cut.toString(), "--no-progress", "--plugins", dir.toString());
-        assertEquals(0, again.exitCode());
-        assertEquals("tautline: journal " + cut.resolve("journal") + " already holds all 9 steps; nothing to resume",
-                again.err().strip());
+        assertEquals(1, again.exitCode());
+        assertEquals("tautline: journal " + cut.resolve("journal") + " records a sweep that ran to its end (9 steps);"
+                + " there is nothing to resume", again.err().strip());
     }
 
     @Test

@@ -1,7 +1,9 @@
 package org.tautline.app.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
 import java.nio.file.Files;
@@ -11,7 +13,7 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tautline.analysis.AnalysisException;
-import org.tautline.driver.sweep.AdaptiveSweepPlan;
+import org.tautline.driver.sweep.SweepPlan;
 import org.tautline.driver.sweep.LevelMode;
 import org.tautline.driver.sweep.SweepDirection;
 
@@ -39,13 +41,39 @@ class SweepPlanFileTest {
 
     @Test
     void readsTheDocumentedExample() throws IOException {
-        AdaptiveSweepPlan plan = SweepPlanFile.read(write(EXAMPLE));
+        SweepPlan plan = SweepPlanFile.read(write(EXAMPLE));
         assertEquals(LevelMode.FORCE, plan.levelMode());
         assertEquals(List.of(0.005, 0.01), plan.levels());
-        assertEquals(List.of(SweepDirection.UP, SweepDirection.DOWN), plan.passes());
+        assertEquals(List.of(SweepDirection.UP, SweepDirection.DOWN), plan.directions());
+        assertEquals(4, plan.passCount());
         assertEquals(5.0, plan.limits().driveV());
         assertEquals(35, plan.coarseStepCount());
-        assertEquals(0.0, plan.fixedDwellS(), "detection unless a dwell is asked for");
+        assertTrue(plan.adaptive());
+        assertTrue(plan.settle().detects(), "detection unless a dwell is asked for");
+    }
+
+    @Test
+    void aPlanWithoutRefinementIsAUniformSweep() throws IOException {
+        SweepPlan plan = SweepPlanFile.read(write("""
+                {"startHz": 150, "stopHz": 800, "levelMode": "drive", "levels": [1.0], "refine": false,
+                 "coarseSteps": 400, "fixedDwellS": 0.5,
+                 "limits": {"driveV": 2, "forceN": 2, "responseAmplitude": 9e-4, "displacementM": 9e-4}}
+                """));
+        assertFalse(plan.adaptive());
+        assertEquals(400, plan.coarseStepCount());
+        assertEquals(0.5, plan.settle().dwellS(150), 0.0);
+    }
+
+    @Test
+    void refusesFieldsItDoesNotKnowAndTargetsWithoutRefinement() throws IOException {
+        Path misspelt = write(EXAMPLE.replace("\"timeBudgetS\": 1800", "\"timeBudgetS\": 1800, \"coarseStep\": 50"));
+        AnalysisException e = assertThrows(AnalysisException.class, () -> SweepPlanFile.read(misspelt));
+        assertTrue(e.getMessage().startsWith(misspelt + ": field \"coarseStep\" is not one this file may hold; expected"
+                + " only startHz, stopHz,"), e.getMessage());
+        Path targets = write(EXAMPLE.replace("\"direction\": \"both\"", "\"direction\": \"both\", \"refine\": false"));
+        e = assertThrows(AnalysisException.class, () -> SweepPlanFile.read(targets));
+        assertEquals(targets + ": field \"frequencyRelStd\" is a refinement target, but \"refine\" is false; remove it,"
+                + " or set \"refine\" to true", e.getMessage());
     }
 
     @Test

@@ -19,8 +19,9 @@ import org.tautline.analysis.verdict.Outcome;
 import org.tautline.analysis.verdict.Verdict;
 import org.tautline.driver.sim.SimulatedSpecimen;
 import org.tautline.driver.sim.TrueMode;
-import org.tautline.driver.sweep.SweepListener;
-import org.tautline.driver.sweep.SweepRecord;
+import org.tautline.driver.sweep.SweepControl;
+import org.tautline.driver.sweep.SweepEventListener;
+import org.tautline.driver.sweep.SweepResult;
 
 /** The whole demo qualification, sweep to verdict, judged against the simulated truth. */
 class DemoQualificationTest {
@@ -28,7 +29,7 @@ class DemoQualificationTest {
 
     @BeforeAll
     static void runTheDemoOnce() {
-        outcome = DemoRun.run(SweepListener.NONE, () -> false);
+        outcome = DemoRun.run(SweepEventListener.NONE, SweepControl.none());
     }
 
     @Test
@@ -107,8 +108,8 @@ class DemoQualificationTest {
 
     @Test
     void spendsThePlannedRigTime() {
-        SweepRecord sweep = outcome.result().sweep().orElseThrow();
-        double planned = DemoScenario.plan().plannedRigTimeS(outcome.truth().config().sampleRateHz());
+        SweepResult sweep = outcome.result().sweep().orElseThrow();
+        double planned = DemoScenario.plan().expectedRigTimeS(outcome.truth().config().sampleRateHz());
         assertEquals(planned, sweep.rigTimeS(), 1e-6 * planned, "rig time follows the plan");
         assertTrue(sweep.completed());
     }

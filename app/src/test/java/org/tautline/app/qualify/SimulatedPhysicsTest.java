@@ -14,8 +14,9 @@ import org.tautline.analysis.specimen.TensionEstimate;
 import org.tautline.driver.sim.SimulatedSpecimen;
 import org.tautline.driver.sim.SimulationConfig;
 import org.tautline.driver.sim.SimulationConfigs;
-import org.tautline.driver.sweep.SteppedSinePlan;
-import org.tautline.driver.sweep.SweepListener;
+import org.tautline.driver.sweep.SweepPlan;
+import org.tautline.driver.sweep.SweepControl;
+import org.tautline.driver.sweep.SweepEventListener;
 
 /** The physics read back from sweeps of the simulated rig, against the simulation's truth. */
 class SimulatedPhysicsTest {
@@ -34,9 +35,12 @@ class SimulatedPhysicsTest {
                 demo.sensors().withForcingPositionM(0.05).withSensorPositionM(0.29), demo.sampleRateHz(), 7L, demo.maxDriveV());
         Specimen stated = new Specimen("STIFF-1", 0.4, mu, 0.005 * mu, ei, 0.1 * ei, EndCondition.PINNED, 0.05, 0.29,
                 tension, 0.0, 0.0, 0.0, Optional.empty());
-        SteppedSinePlan plan = new SteppedSinePlan(120, 1150, 1100, 250, 0.02, 100, 1.0, 0.2, 3);
-        QualificationResult r = DemoRun.run(simulation, stated, plan, DemoScenario.specification(), SweepListener.NONE,
-                () -> false).result();
+        // Half a volt: at 1 V this stiffer wire loads the shaker so that the force near 190 Hz reaches the force
+        // sensor's 5 N full scale; the limit at 4.5 N would stop such a sweep before the sensor clips.
+        SweepPlan plan = SweepPlan.uniform(120, 1150, 1100, 250, 0.02, 100, 0.5, 0.2, 3,
+                new org.tautline.driver.sweep.SafetyLimits(5.0, 4.5, 1e-2, 1e-2));
+        QualificationResult r = DemoRun.run(simulation, stated, plan, DemoScenario.specification(), SweepEventListener.NONE,
+                SweepControl.none()).result();
 
         TensionEstimate t = r.tension().orElseThrow();
         assertTrue(Math.abs(t.tensionN() / tension - 1) < 0.005,
@@ -56,7 +60,7 @@ class SimulatedPhysicsTest {
         SimulationConfig demo = DemoScenario.simulation();
         SimulationConfig misplaced = demo.withSensors(demo.sensors().withForcingPositionM(0.10));
         QualificationResult r = DemoRun.run(misplaced, DemoScenario.specimen(), DemoScenario.plan(),
-                DemoScenario.specification(), SweepListener.NONE, () -> false).result();
+                DemoScenario.specification(), SweepEventListener.NONE, SweepControl.none()).result();
         PatternFit pattern = r.participation().orElseThrow();
         assertTrue(pattern.forcingMismatch(), "the misplaced stinger is flagged: " + pattern.findings());
         // Point-force modal constants (2/(mu L)) sin(n pi x_f/L) sin(n pi x_s/L) (checks.md) locate the real stinger.

@@ -98,7 +98,8 @@ class WorkbenchTest {
             JLabel outcome = find(frame, JLabel.class, "outcome");
             waitFor("the verdict", 60, () -> outcome.getText().startsWith("Verdict"));
             String text = onEdt(outcome::getText);
-            assertEquals("Verdict: PASS", text);
+            String reasons = onEdt(find(frame, javax.swing.text.JTextComponent.class, "reasons")::getText);
+            assertEquals("Verdict: PASS", text, reasons);
             assertEquals(3, (int) onEdt(() -> w.tabs().getSelectedIndex()));
             JTabbedPane resultTabs = find(frame, JTabbedPane.class, "resultTabs");
             int resultTabCount = onEdt(resultTabs::getTabCount);

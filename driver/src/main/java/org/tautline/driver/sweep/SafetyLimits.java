@@ -51,7 +51,7 @@ public record SafetyLimits(double driveV, double forceN, double responseAmplitud
         }
         double responsePeak = peak(samples[1]);
         if (!(responsePeak < responseAmplitude)) {
-            return Optional.of(reason("response", responsePeak, responseAmplitude, "", frequencyHz));
+            return Optional.of(reason("response", responsePeak, responseAmplitude, unitOf(responseQuantity), frequencyHz));
         }
         double w = 2 * Math.PI * frequencyHz;
         double displacement = switch (responseQuantity) {
@@ -65,15 +65,24 @@ public record SafetyLimits(double driveV, double forceN, double responseAmplitud
         return Optional.empty();
     }
 
+    private static String unitOf(String responseQuantity) {
+        return switch (responseQuantity) {
+            case "acceleration" -> "m/s^2";
+            case "velocity" -> "m/s";
+            default -> "m";
+        };
+    }
+
     /** @return the limits in words, for reports and file headers */
     public String describe() {
-        return String.format(Locale.ROOT, "drive %.4g V, force %.4g N, response %.4g, displacement %.4g m", driveV, forceN,
-                responseAmplitude, displacementM);
+        return String.format(Locale.ROOT, "drive %.4g V, force %.4g N, response %s, displacement %.4g m", driveV, forceN,
+                Double.isInfinite(responseAmplitude) ? "not limited beyond the displacement"
+                        : String.format(Locale.ROOT, "%.4g (sensor units)", responseAmplitude), displacementM);
     }
 
     private static String reason(String what, double value, double limit, String unit, double f) {
         return String.format(Locale.ROOT, "safety limit reached: %s peak %.4g %s at %.2f Hz is at or above the limit %.4g %s",
-                what, value, unit, f, limit, unit).replace("  ", " ");
+                what, value, unit, f, limit, unit);
     }
 
     private static double peak(double[] x) {

@@ -14,13 +14,14 @@ public final class ProjectFiles {
     /**
      * @param project a project as read
      * @param file where it was read from, for messages
-     * @return the demo form with every field set from the project
+     * @return the demo form with every field set from the project (safety limits that an older project lacks keep the
+     *         demo's, shown on the setup screen)
      * @throws ProjectFileException when the project lacks a field the form has or has one it does not know
      */
     public static SetupForm formOf(Project project, Path file) throws ProjectFileException {
         SetupForm form = SetupForm.demo();
         for (SetupField f : form.fields()) {
-            if (!project.setup().containsKey(f.key())) {
+            if (!project.setup().containsKey(f.key()) && !SetupForm.mayBeMissingFromOlderProjects(f.key())) {
                 throw new ProjectFileException("project file " + file + ": field 'setup." + f.key() + "' is missing; expected "
                         + f.kind().expected() + (f.unit().isEmpty() ? "" : " of " + f.unit()));
             }

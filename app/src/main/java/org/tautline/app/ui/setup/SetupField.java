@@ -27,6 +27,8 @@ public record SetupField(String key, Section section, String label, String unit,
         SENSORS("Sensors (for imported recordings)"),
         /** The stepped-sine sweep. */
         PLAN("Sweep plan"),
+        /** The safety limits that stop a sweep. */
+        SAFETY("Safety limits (the sweep ramps down and stops at any of them)"),
         /** The specification limits the verdict judges. */
         LIMITS("Specification limits");
 

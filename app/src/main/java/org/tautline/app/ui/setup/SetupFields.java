@@ -8,6 +8,7 @@ import static org.tautline.app.ui.setup.SetupField.Kind.TEXT;
 import static org.tautline.app.ui.setup.SetupField.Kind.WHOLE;
 import static org.tautline.app.ui.setup.SetupField.Section.LIMITS;
 import static org.tautline.app.ui.setup.SetupField.Section.PLAN;
+import static org.tautline.app.ui.setup.SetupField.Section.SAFETY;
 import static org.tautline.app.ui.setup.SetupField.Section.SENSORS;
 import static org.tautline.app.ui.setup.SetupField.Section.SPECIMEN;
 
@@ -20,7 +21,7 @@ import org.tautline.analysis.specimen.EndCondition;
 import org.tautline.analysis.specimen.Specimen;
 import org.tautline.analysis.verdict.Limit;
 import org.tautline.analysis.verdict.Specification;
-import org.tautline.driver.sweep.SteppedSinePlan;
+import org.tautline.driver.sweep.SweepPlan;
 
 /** The fields of the setup form, and the values of a specimen, plan and specification as text. */
 final class SetupFields {
@@ -55,6 +56,11 @@ final class SetupFields {
         f.add(SetupField.of("driveAmplitudeV", PLAN, "Drive amplitude (peak)", "V", POSITIVE));
         f.add(SetupField.of("rampS", PLAN, "Ramp up / down", "s", NON_NEGATIVE));
         f.add(SetupField.of("harmonicOrder", PLAN, "Highest harmonic fitted", "", WHOLE));
+        f.add(SetupField.of("safety.driveV", SAFETY, "Drive never above", "V", POSITIVE));
+        f.add(SetupField.of("safety.forceN", SAFETY, "Stop when the force reaches", "N", POSITIVE));
+        f.add(SetupField.of("safety.responseAmplitude", SAFETY, "Stop when the response reaches", "sensor's unit",
+                POSITIVE));
+        f.add(SetupField.of("safety.displacementM", SAFETY, "Stop when the specimen moves", "m", POSITIVE));
         for (Limit l : limits) {
             String label = Character.toUpperCase(l.name().charAt(0)) + l.name().substring(1);
             f.add(SetupField.of(lowerKey(l), LIMITS, label + ": at least", l.unit(), OPTIONAL_NUMBER));
@@ -71,7 +77,11 @@ final class SetupFields {
         return "limit." + limit.figureKey() + ".upper";
     }
 
-    static Map<String, String> valuesOf(Specimen s, SteppedSinePlan p, Specification spec) {
+    /** The safety-limit fields, which project files written before they existed may lack. */
+    static final List<String> SAFETY_KEYS = List.of("safety.driveV", "safety.forceN", "safety.responseAmplitude",
+            "safety.displacementM");
+
+    static Map<String, String> valuesOf(Specimen s, SweepPlan p, Specification spec) {
         Map<String, String> v = new LinkedHashMap<>();
         v.put("id", s.id());
         v.put("lengthM", SetupForm.format(s.lengthM()));
@@ -90,13 +100,17 @@ final class SetupFields {
         v.put("responseSensitivityVPerUnit", "1");
         v.put("startHz", SetupForm.format(p.startHz()));
         v.put("stopHz", SetupForm.format(p.stopHz()));
-        v.put("stepCount", Integer.toString(p.stepCount()));
-        v.put("settleCycles", SetupForm.format(p.settleCycles()));
-        v.put("minSettleS", SetupForm.format(p.minSettleS()));
+        v.put("stepCount", Integer.toString(p.coarseStepCount()));
+        v.put("settleCycles", SetupForm.format(p.settle().cycles()));
+        v.put("minSettleS", SetupForm.format(p.settle().minS()));
         v.put("integrationCycles", Integer.toString(p.integrationCycles()));
-        v.put("driveAmplitudeV", SetupForm.format(p.driveAmplitudeV()));
+        v.put("driveAmplitudeV", SetupForm.format(p.levels().get(0)));
         v.put("rampS", SetupForm.format(p.rampS()));
         v.put("harmonicOrder", Integer.toString(p.harmonicOrder()));
+        v.put("safety.driveV", SetupForm.format(p.limits().driveV()));
+        v.put("safety.forceN", SetupForm.format(p.limits().forceN()));
+        v.put("safety.responseAmplitude", SetupForm.format(p.limits().responseAmplitude()));
+        v.put("safety.displacementM", SetupForm.format(p.limits().displacementM()));
         for (Limit l : spec.limits()) {
             v.put(lowerKey(l), SetupForm.format(l.lowerBound()));
             v.put(upperKey(l), SetupForm.format(l.upperBound()));

@@ -18,7 +18,8 @@ import org.tautline.analysis.verdict.Limit;
 import org.tautline.analysis.verdict.Specification;
 import org.tautline.app.qualify.DemoScenario;
 import org.tautline.driver.RigException;
-import org.tautline.driver.sweep.SteppedSinePlan;
+import org.tautline.driver.sweep.SafetyLimits;
+import org.tautline.driver.sweep.SweepPlan;
 
 /**
  * The setup as typed: specimen, sweep plan and specification limits, each field a string, with
@@ -46,7 +47,7 @@ public final class SetupForm {
      * @param specification the limits; each limit's bounds become two fields
      * @return the form showing those values
      */
-    public static SetupForm of(Specimen specimen, SteppedSinePlan plan, Specification specification) {
+    public static SetupForm of(Specimen specimen, SweepPlan plan, Specification specification) {
         return new SetupForm(SetupFields.all(specification.limits()), specification.limits(),
                 SetupFields.valuesOf(specimen, plan, specification));
     }
@@ -155,11 +156,21 @@ public final class SetupForm {
                 number("nominalTensionN"), 0.0, 0.0, number("axialStiffnessN"), Optional.empty());
     }
 
-    /** @return the sweep plan; throws when a field is wrong */
-    public SteppedSinePlan plan() {
-        return new SteppedSinePlan(number("startHz"), number("stopHz"), (int) number("stepCount"), number("settleCycles"),
+    /** @return the sweep plan, a uniform one with the safety limits as typed; throws when a field is wrong */
+    public SweepPlan plan() {
+        SafetyLimits limits = new SafetyLimits(number("safety.driveV"), number("safety.forceN"),
+                number("safety.responseAmplitude"), number("safety.displacementM"));
+        return SweepPlan.uniform(number("startHz"), number("stopHz"), (int) number("stepCount"), number("settleCycles"),
                 number("minSettleS"), (int) number("integrationCycles"), number("driveAmplitudeV"), number("rampS"),
-                (int) number("harmonicOrder"));
+                (int) number("harmonicOrder"), limits);
+    }
+
+    /**
+     * @param key a field key
+     * @return true for the safety-limit fields, which project files written before they existed may lack
+     */
+    public static boolean mayBeMissingFromOlderProjects(String key) {
+        return SetupFields.SAFETY_KEYS.contains(key);
     }
 
     /** @return the specification with the bounds as typed; throws when a bound is wrong */

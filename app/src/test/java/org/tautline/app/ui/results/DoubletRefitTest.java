@@ -9,7 +9,8 @@ import org.tautline.analysis.verdict.LimitResult;
 import org.tautline.analysis.verdict.Outcome;
 import org.tautline.app.qualify.DemoRun;
 import org.tautline.app.qualify.QualificationResult;
-import org.tautline.driver.sweep.SweepListener;
+import org.tautline.driver.sweep.SweepControl;
+import org.tautline.driver.sweep.SweepEventListener;
 
 /**
  * Dropping one member of a doublet by hand still gives a judged result instead of stopping the refit: figures
@@ -19,7 +20,7 @@ class DoubletRefitTest {
 
     @Test
     void droppingOnePolarisationOfTheFundamentalGivesAResultThatSaysWhatItLacks() {
-        QualificationResult demo = DemoRun.run(SweepListener.NONE, () -> false).result();
+        QualificationResult demo = DemoRun.run(SweepEventListener.NONE, SweepControl.none()).result();
         long fundamentals = demo.modes().stream().filter(m -> m.harmonic() == 1).count();
         assertEquals(2, fundamentals, "the demo wire's fundamental is a doublet: " + demo.modes());
         double weaker = demo.modes().stream().filter(m -> m.harmonic() == 1)

@@ -25,7 +25,8 @@ import org.tautline.analysis.modal.Pole;
 import org.tautline.app.qualify.DemoRun;
 import org.tautline.app.ui.SwingDriver;
 import org.tautline.app.qualify.QualificationResult;
-import org.tautline.driver.sweep.SweepListener;
+import org.tautline.driver.sweep.SweepControl;
+import org.tautline.driver.sweep.SweepEventListener;
 
 /** Shows the results of the demo qualification in a window, saves a screenshot of every tab, and refits by a click. */
 class ResultsViewTest {
@@ -42,7 +43,7 @@ class ResultsViewTest {
             }
             Assumptions.abort("no display: the results view tests need one (run them under Xvfb)");
         }
-        demo = DemoRun.run(SweepListener.NONE, () -> false).result();
+        demo = DemoRun.run(SweepEventListener.NONE, SweepControl.none()).result();
         SwingUtilities.invokeAndWait(() -> {
             view = new ResultsView();
             view.show(demo);

@@ -6,14 +6,17 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.List;
+import java.util.Optional;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import org.junit.jupiter.api.Test;
+import org.tautline.driver.journal.JournalContents;
+import org.tautline.driver.journal.JournalReader;
+import org.tautline.driver.sweep.SweepStatus;
 import org.junit.jupiter.api.io.TempDir;
 
 /** {@code tautline sweep --plan}: cautions first, then the adaptive run, its journal and FRF. */
-class AdaptiveSweepCommandTest {
+class PlanSweepCommandTest {
     @TempDir
     Path dir;
 
@@ -36,13 +39,9 @@ class AdaptiveSweepCommandTest {
         JsonNode pass = node.get("passes").get(0);
         assertTrue(pass.get("modes").size() >= 1, "the first mode (228 Hz) was refined: " + pass);
         assertTrue(Files.exists(Path.of(pass.get("frf").asText())));
-        List<String> lines = Files.readAllLines(run.resolve(AdaptiveJournalFile.NAME));
-        assertEquals(pass.get("steps").asInt() + 1, lines.size(), "every step journaled, then the ending");
-        for (int i = 0; i < lines.size() - 1; i++) {
-            assertEquals(i, ResultJson.MAPPER.readTree(lines.get(i)).get("index").asInt());
-        }
-        JsonNode end = ResultJson.MAPPER.readTree(lines.get(lines.size() - 1));
-        assertEquals("end", end.get("record").asText());
-        assertEquals("completed", end.get("status").asText());
+        JournalContents journal = JournalReader.read(run.resolve(SweepCommand.JOURNAL));
+        assertEquals(pass.get("steps").asInt(), journal.steps().size(), "every step journaled, in the one journal format");
+        assertTrue(journal.header().plan().adaptive(), "the journal records the whole plan");
+        assertEquals(Optional.of(SweepStatus.COMPLETED), journal.lastStatus());
     }
 }

@@ -1,0 +1,56 @@
+package org.tautline.app.cli;
+
+import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.TimeUnit;
+
+import org.tautline.driver.sweep.SweepControl;
+
+/**
+ * Turns a stop signal (Ctrl-C, {@code kill}) during a sweep into a stop of the sweep, and holds the process until
+ * the user has been told what happened.
+ *
+ * <p>On the signal, a shutdown hook calls {@link SweepControl#stopNow(String)}: the rig's output is commanded off
+ * at once from the hook's thread where the rig allows it (a serial rig does), and the sweep ramps down and ends
+ * as cancelled before its next block. The hook then waits (at most {@value #HOLD_S} s) until {@link #close()} is
+ * called, which the command does after it has journaled the end and printed how to resume, so nothing is cut
+ * short by the process ending.
+ */
+final class SignalStop implements AutoCloseable {
+    /** Longest time the ending process waits for the sweep to wind down and the command to report, s. */
+    static final long HOLD_S = 60;
+    /** The reason a stop signal gives, as the journal records it. */
+    static final String REASON = "interrupted by a stop signal (Ctrl-C or kill)";
+
+    private final SweepControl control = new SweepControl();
+    private final CountDownLatch reported = new CountDownLatch(1);
+    private final Thread hook;
+
+    /** Installs the shutdown hook. */
+    SignalStop() {
+        hook = new Thread(() -> {
+            control.stopNow(REASON);
+            try {
+                reported.await(HOLD_S, TimeUnit.SECONDS);
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+            }
+        }, "tautline-stop-signal");
+        Runtime.getRuntime().addShutdownHook(hook);
+    }
+
+    /** @return the control to hand to the sweep */
+    SweepControl control() {
+        return control;
+    }
+
+    /** Lets an ending process end: call once the end of the sweep is journaled and reported. Idempotent. */
+    @Override
+    public void close() {
+        reported.countDown();
+        try {
+            Runtime.getRuntime().removeShutdownHook(hook);
+        } catch (IllegalStateException shuttingDown) {
+            // The process is ending: the hook is running and has just been released.
+        }
+    }
+}
