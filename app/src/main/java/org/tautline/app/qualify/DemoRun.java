@@ -8,6 +8,7 @@ import org.tautline.analysis.verdict.Specification;
 import org.tautline.driver.sim.SimulatedRig;
 import org.tautline.driver.sim.SimulationConfig;
 import org.tautline.driver.sim.SimulationTruth;
+import org.tautline.driver.spi.Rig;
 import org.tautline.driver.sweep.SweepControl;
 import org.tautline.driver.sweep.SweepEngine;
 import org.tautline.driver.sweep.SweepEventListener;
@@ -47,19 +48,36 @@ public final class DemoRun {
      */
     public static DemoOutcome run(SimulationConfig simulation, Specimen stated, SweepPlan plan,
                                   Specification specification, SweepEventListener listener, SweepControl control) {
-        long startNs = System.nanoTime();
         try (SimulatedRig rig = new SimulatedRig(simulation)) {
-            SimulationTruth truth = rig.truth();
-            SweepResult sweep = new SweepEngine(rig).run(plan, listener, control, SweepJournal.NONE);
-            if (!sweep.completed()) {
-                throw new SweepStoppedException(sweep);
-            }
-            QualificationResult result = Qualification.analyse(stated, sweep, specification, startNs);
-            Optional<LinearityResult> linearity = LevelCheck.run(rig, result, plan, SweepEventListener.NONE, control);
-            if (linearity.isPresent()) {
-                result = Qualification.withLinearity(result, linearity.get(), Optional.of(specification));
-            }
-            return new DemoOutcome(result, truth);
+            return run(rig, rig.truth(), stated, plan, specification, listener, control);
         }
+    }
+
+    /**
+     * Sweeps a specimen on a connected rig that simulates it, qualifies it, then runs the level check.
+     *
+     * @param rig the rig (left open)
+     * @param truth the specimen as the rig simulates it
+     * @param stated what the technician states about the specimen
+     * @param plan the sweep
+     * @param specification the limits
+     * @param listener progress events of the main sweep
+     * @param control stop requests, for the main sweep and the level check
+     * @return the result and the simulated truth
+     * @throws SweepStoppedException when the sweep ended before its end (a stop, a safety limit): nothing is qualified
+     */
+    public static DemoOutcome run(Rig rig, SimulationTruth truth, Specimen stated, SweepPlan plan,
+                                  Specification specification, SweepEventListener listener, SweepControl control) {
+        long startNs = System.nanoTime();
+        SweepResult sweep = new SweepEngine(rig).run(plan, listener, control, SweepJournal.NONE);
+        if (!sweep.completed()) {
+            throw new SweepStoppedException(sweep);
+        }
+        QualificationResult result = Qualification.analyse(stated, sweep, specification, startNs);
+        Optional<LinearityResult> linearity = LevelCheck.run(rig, result, plan, SweepEventListener.NONE, control);
+        if (linearity.isPresent()) {
+            result = Qualification.withLinearity(result, linearity.get(), Optional.of(specification));
+        }
+        return new DemoOutcome(result, truth);
     }
 }

@@ -125,7 +125,10 @@ final class RunController {
         }
         TappedRig closing = rig;
         rig = null;
-        session = null;
+        if (session != null && session.state() != SweepSession.State.PAUSED) {
+            // A paused or interrupted sweep is kept: reconnect (on another port if the rig moved) and Resume.
+            session = null;
+        }
         parts.rig().connected(false, List.of("Not connected."));
         parts.status().rig("not connected");
         updateButtons();

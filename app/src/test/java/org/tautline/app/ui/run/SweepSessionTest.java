@@ -13,6 +13,8 @@ import org.junit.jupiter.api.Test;
 import org.tautline.app.qualify.DemoScenario;
 import org.tautline.driver.RigException;
 import org.tautline.driver.spi.RigDrivers;
+import org.tautline.driver.sim.SimulatedRigDriver;
+import org.tautline.driver.sweep.RecordingRig;
 import org.tautline.driver.sweep.SweepEventListener;
 import org.tautline.driver.sweep.SweepPlan;
 import org.tautline.driver.sweep.SweepPoint;
@@ -84,12 +86,14 @@ class SweepSessionTest {
     void aSafetyLimitStopsTheSweepAndKeepsTheSteps() {
         SweepPlan tight = SweepPlan.uniform(200.0, 260.0, 12, 20, 0.005, 20, 0.5, 0.02, 1,
                 new org.tautline.driver.sweep.SafetyLimits(5.0, 2.0, 5e-4, 1e-5));
-        try (TappedRig rig = RigConnection.open(RigDrivers.standard(), "sim", Map.of(), block -> { })) {
+        // The workbench's path: the sweep session on the connected rig, here the simulated wire recorded.
+        try (RecordingRig rig = new RecordingRig(new SimulatedRigDriver().open(Map.of()))) {
             SweepSession session = new SweepSession(tight);
             SweepResult r = session.run(rig, SweepEventListener.NONE);
             assertEquals(SweepStatus.LIMIT, r.status(), r.reason());
             assertTrue(r.reason().startsWith("safety limit reached: specimen displacement"), r.reason());
-            assertFalse(rig.exciter().isOutputEnabled());
+            rig.assertTrippedOnTheLastBlock("specimen displacement", tight.limits());
+            rig.assertRampedDownThenOff(tight.rampS());
             assertEquals(SweepSession.State.PAUSED, session.state());
         }
     }

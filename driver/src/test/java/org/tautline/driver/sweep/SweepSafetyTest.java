@@ -21,44 +21,38 @@ import org.tautline.driver.sim.SimulatedRig;
  * zero over the plan's ramp time before the output is switched off (never a step to zero, which would
  * ring the specimen: common practice), and the journal holds exactly the steps the result holds.
  */
-class AdaptiveSweepSafetyTest {
+class SweepSafetyTest {
     private static final double RAMP_S = 0.1;
 
     private static SweepPlan plan(SafetyLimits limits) {
         return SweepFixtures.adaptive(200, 260, LevelMode.DRIVE, 1.0, limits, 9, 1.0, RAMP_S);
     }
 
-    @ParameterizedTest(name = "{0}")
+    /** A uniform plan over the same band: 30 steps, a fixed dwell of 40 cycles. */
+    private static SweepPlan uniformPlan(SafetyLimits limits) {
+        return SweepPlan.uniform(200, 260, 30, 40, 0.0, 32, 1.0, RAMP_S, 1, limits);
+    }
+
+    @ParameterizedTest(name = "{0}, {1} plan")
     @CsvSource({
-            "force, 10, 0.1, 9e-4, 9e-4",
-            "response, 10, 4, 4.5e-5, 9e-4",
-            "specimen displacement, 10, 4, 9e-4, 4.5e-5"})
-    void eachMeasuredLimitTripsWithinOneBlockAndRampsDown(String what, double driveV, double forceN, double response,
-                                                           double displacementM) {
+            "force, adaptive, 10, 0.1, 9e-4, 9e-4",
+            "response, adaptive, 10, 4, 4.5e-5, 9e-4",
+            "specimen displacement, adaptive, 10, 4, 9e-4, 4.5e-5",
+            "force, uniform, 10, 0.1, 9e-4, 9e-4",
+            "response, uniform, 10, 4, 4.5e-5, 9e-4",
+            "specimen displacement, uniform, 10, 4, 9e-4, 4.5e-5"})
+    void eachMeasuredLimitTripsWithinOneBlockAndRampsDown(String what, String kind, double driveV, double forceN,
+                                                           double response, double displacementM) {
         RecordingRig rig = new RecordingRig(new SimulatedRig(SweepFixtures.singlePolarisationWire()));
         RecordingJournal journal = new RecordingJournal();
         SafetyLimits limits = new SafetyLimits(driveV, forceN, response, displacementM);
-        SweepResult result = new SweepEngine(rig).run(plan(limits), SweepEventListener.NONE, SweepControl.none(),
-                journal);
+        SweepPlan plan = kind.equals("uniform") ? uniformPlan(limits) : plan(limits);
+        SweepResult result = new SweepEngine(rig).run(plan, SweepEventListener.NONE, SweepControl.none(), journal);
 
         assertEquals(SweepStatus.LIMIT, result.status(), result.reason());
         assertTrue(result.reason().startsWith("safety limit reached: " + what), result.reason());
-        int firstOver = -1;
-        for (int i = 0; i < rig.blockPeaks.size(); i++) {
-            double[] p = rig.blockPeaks.get(i);
-            double displacement = p[1]; // the simulated sensor measures displacement
-            boolean over = switch (what) {
-                case "force" -> p[0] >= forceN;
-                case "response" -> p[1] >= response;
-                default -> displacement >= displacementM;
-            };
-            if (over) {
-                firstOver = i;
-                break;
-            }
-        }
-        assertEquals(rig.blockPeaks.size() - 1, firstOver, "the block that reached the limit is the last one read");
-        assertRampedDownThenOff(rig);
+        rig.assertTrippedOnTheLastBlock(what, limits);
+        rig.assertRampedDownThenOff(RAMP_S);
         assertEquals(List.of(SweepStatus.LIMIT), journal.endings);
         assertEquals(result.reason(), journal.reasons.get(0), "the journal records why");
         assertEquals(result.passes().get(0).points().size(), journal.steps.size());
@@ -74,7 +68,7 @@ class AdaptiveSweepSafetyTest {
 
         assertEquals(SweepStatus.CANCELLED, result.status());
         assertFalse(rig.exciter().isOutputEnabled(), "output off after a cancel");
-        assertRampedDownThenOff(rig);
+        rig.assertRampedDownThenOff(RAMP_S);
         List<SweepPoint> points = result.passes().get(0).points();
         assertTrue(points.size() > 0 && points.size() < 30, "stopped part way: " + points.size() + " steps");
         assertEquals(points.size(), journal.steps.size(), "every completed step is journaled, the step in progress not");
@@ -109,23 +103,5 @@ class AdaptiveSweepSafetyTest {
         RigException e = assertThrows(RigException.class, () -> SweepFixtures.adaptive(200, 260, LevelMode.DRIVE, 3.0,
                 new SafetyLimits(2.0, 4, 9e-4, 9e-4), 9, 1.0, RAMP_S));
         assertEquals("sweep plan: drive level 3.0 V is above limits.driveV 2.0 V", e.getMessage());
-    }
-
-    /** After the stop: a ramp to 0 V over the ramp time, then output off, and no zero-amplitude step while on. */
-    private static void assertRampedDownThenOff(RecordingRig rig) {
-        List<RecordingRig.Command> c = rig.commands;
-        RecordingRig.Command last = c.get(c.size() - 1);
-        RecordingRig.Command beforeLast = c.get(c.size() - 2);
-        assertEquals("off", last.kind());
-        assertEquals("ramp", beforeLast.kind());
-        assertEquals(0.0, beforeLast.amplitudeV());
-        assertEquals(RAMP_S, beforeLast.durationS(), 1e-12);
-        boolean on = false;
-        for (RecordingRig.Command cmd : c) {
-            on = cmd.kind().equals("on") || (on && !cmd.kind().equals("off"));
-            if (on && cmd.kind().equals("sine")) {
-                assertTrue(cmd.amplitudeV() > 0, "no step of the drive to zero while the output is on");
-            }
-        }
     }
 }
