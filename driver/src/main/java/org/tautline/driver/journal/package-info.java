@@ -1,8 +1,10 @@
 /**
- * The sweep journal: an append-only, fsynced record of every completed step, read back after any interruption and resumed.
+ * The sweep journal: an append-only, fsynced record of every completed step of any sweep plan, read back after any
+ * interruption and resumed.
  *
  * <h2>Journal file</h2>
- * Text, US-ASCII, one record per line ending in a line feed (0x0A):
+ * Text, US-ASCII, one record per line ending in a line feed (0x0A; a
+ * carriage return before it, as a Windows editor may leave, is ignored):
  * <pre>TYPE key=value key=value ... crc=HHHHHHHH</pre>
  * {@code crc} is the CRC-32 (the ISO-HDLC polynomial of {@link java.util.zip.CRC32}) of every byte of
  * the line before {@code " crc="}, as eight upper-case hex digits. Values are percent-encoded: every
@@ -11,18 +13,25 @@
  * ({@link Double#toString(double)}), so they read back bit for bit; times are ISO-8601 UTC instants.
  * Records, in order:
  * <ul>
- *   <li>{@code HEADER}, once, first: {@code format=tautline-journal version=1 startedAt driver
+ *   <li>{@code HEADER}, once, first: {@code format=tautline-journal version=2 startedAt driver
  *       option.NAME=VALUE...} (every option the rig was opened with, defaults included) {@code identity
- *       sampleRateHz channels=N channel.I.name channel.I.quantity channel.I.unit plan.startHz plan.stopHz
- *       plan.stepCount plan.settleCycles plan.minSettleS plan.integrationCycles plan.driveAmplitudeV
- *       plan.rampS plan.harmonicOrder samples=FILE|none}.</li>
- *   <li>{@code STEP}, one per completed step in plan order: {@code index} (0 first) {@code frequencyHz
- *       driveAmplitudeV rigTimeS}, then for {@code force} and {@code response} the whole sine fit:
+ *       sampleRateHz channels=N channel.I.name channel.I.quantity channel.I.unit}, then the whole sweep plan:
+ *       {@code plan.startHz plan.stopHz plan.coarseSteps plan.settleTolerance} (0 for a fixed dwell)
+ *       {@code plan.settleCycles plan.minSettleS plan.integrationCycles plan.levelMode=force|drive plan.levels}
+ *       (comma-separated) {@code plan.limits.driveV plan.limits.forceN plan.limits.responseAmplitude
+ *       plan.limits.displacementM plan.direction=up|down|both plan.refinement=yes|none} (with
+ *       {@code plan.frequencyRelStd plan.dampingRelStd plan.timeBudgetS} when yes) {@code plan.initialDampingRatio
+ *       plan.levelTolerance plan.initialDriveV plan.driveRateVPerS plan.rampS plan.harmonicOrder}, and
+ *       {@code samples=FILE|none}.</li>
+ *   <li>{@code STEP}, one per completed step in the order run: {@code index} (0 first, counting every pass)
+ *       {@code pass} (0 first) {@code phase=coarse|locate|refine frequencyHz driveAmplitudeV rigTimeS}
+ *       {@code settle=settled|timed_out|fixed_dwell settleS} and, when the level control could not reach its
+ *       target, {@code warning}; then for {@code force} and {@code response} the whole sine fit:
  *       {@code .frequencyHz .amplitude .phaseRad .offset .harmonics} (comma-separated peak amplitudes of
  *       harmonics 2, 3, ..., or {@code none}) {@code .residualRms .amplitudeStd .phaseStdRad .sampleCount};
  *       then, derived from those for reading by eye, {@code frf.re frf.im relativeResidual
  *       relativeStdError}; and when samples are kept {@code samples.offset samples.count samples.crc}.</li>
- *   <li>{@code END status=completed|cancelled|fault at completedSteps reason}: how a session ended,
+ *   <li>{@code END status=completed|cancelled|limit|fault at completedSteps reason}: how a session ended,
  *       written once the output is off. A journal cut off by a power loss or a kill has none.</li>
  *   <li>{@code RESUMED at identity completedSteps}: a resume starts a new session; its steps and END follow.</li>
  * </ul>
@@ -36,7 +45,7 @@
  *
  * <h2>Durability and read-back</h2>
  * Every record is written and forced ({@link java.nio.channels.FileChannel#force(boolean)}) before
- * the runner commands the next step. {@link org.tautline.driver.journal.JournalReader} keeps every
+ * the engine commands the next step. {@link org.tautline.driver.journal.JournalReader} keeps every
  * record up to the first one that lacks its line feed or fails its CRC, and says at which byte it
  * stopped; a resume cuts the file there before appending.
  */
