@@ -3,6 +3,7 @@ package org.tautline.app.cli;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 
+import org.tautline.driver.serial.ShutdownHooks;
 import org.tautline.driver.sweep.SweepControl;
 
 /**
@@ -23,19 +24,27 @@ final class SignalStop implements AutoCloseable {
 
     private final SweepControl control = new SweepControl();
     private final CountDownLatch reported = new CountDownLatch(1);
-    private final Thread hook;
 
     /** Installs the shutdown hook. */
     SignalStop() {
-        hook = new Thread(() -> {
-            control.stopNow(REASON);
+        Thread hook = new Thread(() -> {
+            if (reported.getCount() == 0) {
+                return;
+            }
+            try {
+                control.stopNow(REASON);
+            } catch (RuntimeException e) {
+                // The off command is best effort here; the sweep still switches off at its next block.
+            }
             try {
                 reported.await(HOLD_S, TimeUnit.SECONDS);
             } catch (InterruptedException e) {
                 Thread.currentThread().interrupt();
             }
         }, "tautline-stop-signal");
-        Runtime.getRuntime().addShutdownHook(hook);
+        // Through the serial library: it releases its ports only after this hook has run, so a serial rig can
+        // still be switched off and the sweep can ramp down and journal its end.
+        ShutdownHooks.add(hook);
     }
 
     /** @return the control to hand to the sweep */
@@ -43,14 +52,12 @@ final class SignalStop implements AutoCloseable {
         return control;
     }
 
-    /** Lets an ending process end: call once the end of the sweep is journaled and reported. Idempotent. */
+    /**
+     * Lets an ending process end: call once the end of the sweep is journaled and reported. Idempotent. The hook
+     * stays registered (the serial library offers no removal) and does nothing when the process ends later.
+     */
     @Override
     public void close() {
         reported.countDown();
-        try {
-            Runtime.getRuntime().removeShutdownHook(hook);
-        } catch (IllegalStateException shuttingDown) {
-            // The process is ending: the hook is running and has just been released.
-        }
     }
 }
