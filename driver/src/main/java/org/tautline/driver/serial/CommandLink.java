@@ -285,26 +285,29 @@ final class CommandLink {
         send("LINK:STAT? " + tag);
         long sent = waitStart;
         int tries = 1;
+        boolean hurried = false;
         while (true) {
             LinkEvent e = nextEvent(5);
             if (e instanceof LinkEvent.Status s && s.status().tag() >= tag) {
                 return s.status();
             }
-            boolean overdue = false;
             if (e == null) {
                 checkSilence(waitStart, "a status reply " + during);
-                overdue = System.nanoTime() - sent > timing.retryMs() * 1_000_000L;
-                if (overdue) {
+                if (System.nanoTime() - sent > timing.retryMs() * 1_000_000L) {
+                    if (++tries > MAX_TRIES) {
+                        throw fail(new RigLinkException(Kind.PROTOCOL, port, "no readable status reply " + during
+                                + " in " + MAX_TRIES + " tries", "STAT lines whose check matches"));
+                    }
                     inbox.abandonPending();
+                    send("LINK:STAT? " + tag);
+                    sent = System.nanoTime();
+                    hurried = false;
                 }
-            }
-            if (overdue || e instanceof LinkEvent.Garbled || e instanceof LinkEvent.Reply) {
-                if (++tries > MAX_TRIES) {
-                    throw fail(new RigLinkException(Kind.PROTOCOL, port, "no readable status reply " + during + " in "
-                            + MAX_TRIES + " tries", "STAT lines whose check matches"));
-                }
+            } else if (!hurried && (e instanceof LinkEvent.Garbled || e instanceof LinkEvent.Reply)) {
+                // Perhaps the status itself arrived damaged: ask once more at once. Further garbage (a damaged
+                // block read as text) waits for the retry time, so that it cannot use up the tries.
                 send("LINK:STAT? " + tag);
-                sent = System.nanoTime();
+                hurried = true;
             }
         }
     }

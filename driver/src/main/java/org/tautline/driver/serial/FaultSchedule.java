@@ -11,11 +11,12 @@ import org.tautline.driver.RigException;
  * When the virtual rig injects which faults: a list of moments, each counted in items the device has sent since
  * the schedule was installed ({@link VirtualRigServer#schedule(FaultSchedule)}).
  *
- * <p>An item is one line (reply, status or notice) or one data block. A fault at moment k happens when the device
- * has sent k items: {@link InjectedFault#STALL}, {@link InjectedFault#FORGET_HISTORY}, {@link InjectedFault#RESET},
+ * <p>An item is one line (reply, status or notice) or one data block, counted from 0. A fault at moment k happens
+ * when the device has sent k items: {@link InjectedFault#STALL}, {@link InjectedFault#RESET},
  * {@link InjectedFault#AMPLIFIER_FAULT} and {@link InjectedFault#DISAPPEAR} just before item k is taken (so a notice
- * they cause is item k), the others change item k itself ({@link InjectedFault#CORRUPT_BLOCK} and
- * {@link InjectedFault#LOSE_BLOCK} the first data block from item k on). For orientation: a read of n samples is
+ * they cause is item k); {@link InjectedFault#DROP_BYTES} changes item k itself, {@link InjectedFault#CORRUPT_BLOCK}
+ * and {@link InjectedFault#LOSE_BLOCK} the first data block from item k on; {@link InjectedFault#FORGET_HISTORY}
+ * strikes just after item k has been sent (so a block corrupted at k cannot be re-sent). For orientation: a read of n samples is
  * ceil(n / block) blocks and at least one status line; each drive command is followed by one status line.
  *
  * @param entries the faults, sorted by moment

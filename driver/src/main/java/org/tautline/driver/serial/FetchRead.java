@@ -100,10 +100,17 @@ final class FetchRead {
         long finalSent = 0;
         String symptom = null;
         boolean stuckBlockReleased = false;
+        boolean finalHurried = false;
+        int finalTries = 1;
         while (true) {
             DataBlock b = early.remove(awaited);
             LinkEvent e = b != null ? new LinkEvent.Block(b) : link.nextEvent(5);
             long now = System.nanoTime();
+            if (e instanceof LinkEvent.Block || e instanceof LinkEvent.Damaged) {
+                // The stream moves: a re-sent block waits behind the blocks still due, so it is not overdue yet.
+                lastProgress = now;
+            }
+            lastProgress = Math.max(lastProgress, inbox.lastPartialBlockNanos());
             if (e instanceof LinkEvent.Status s) {
                 link.verify(s.status(), outputBelievedOn.getAsBoolean(), "during " + request);
                 if (finalTag >= 0 && s.status().tag() >= finalTag) {
@@ -148,16 +155,21 @@ final class FetchRead {
                     && finalTag < 0) {
                 throw lose("the device could not resend data block " + awaited + " (" + r.text().substring(4).strip()
                         + ")" + (symptom == null ? "" : " after " + symptom));
-            } else if (e instanceof LinkEvent.Garbled && finalTag >= 0) {
-                finalTag = sendStatus();
-                finalSent = now;
+            } else if (e instanceof LinkEvent.Garbled && finalTag >= 0 && !finalHurried) {
+                sendStatus();
+                finalHurried = true;
             } else if (e == null) {
                 link.checkSilence(Math.max(waitStart, lastProgress), finalTag >= 0 ? "the status after " + request
                         : "data block " + awaited + " of " + request);
                 if (finalTag >= 0 && now - finalSent > t.retryMs() * 1_000_000L) {
+                    if (++finalTries > CommandLink.MAX_TRIES) {
+                        throw link.fail(new RigLinkException(Kind.PROTOCOL, port, "no readable status reply after "
+                                + request + " in " + CommandLink.MAX_TRIES + " tries", "STAT lines whose check matches"));
+                    }
                     inbox.abandonPending();
-                    finalTag = sendStatus();
+                    sendStatus();
                     finalSent = now;
+                    finalHurried = false;
                 } else if (finalTag < 0 && now - lastProgress > t.retryMs() * 1_000_000L) {
                     if (reRequested.contains(awaited) && !stuckBlockReleased) {
                         // A block cut short by lost bytes holds the decoder until its length is made up, perhaps

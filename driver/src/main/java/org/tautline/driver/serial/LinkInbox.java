@@ -22,6 +22,7 @@ final class LinkInbox implements StreamDecoder.Sink, SerialTransport.Receiver {
     private final LinkedBlockingQueue<LinkEvent> events = new LinkedBlockingQueue<>();
     private volatile RigLinkException linkFault;
     private volatile long lastByteNanos = System.nanoTime();
+    private volatile long lastPartialBlockNanos;
     private final AtomicLong strayFaults = new AtomicLong();
     private final AtomicLong bytesReceived = new AtomicLong();
 
@@ -32,10 +33,14 @@ final class LinkInbox implements StreamDecoder.Sink, SerialTransport.Receiver {
 
     @Override
     public void bytes(byte[] data, int offset, int length) {
-        lastByteNanos = System.nanoTime();
+        long now = System.nanoTime();
+        lastByteNanos = now;
         bytesReceived.addAndGet(length);
         synchronized (decoder) {
             decoder.feed(data, offset, length);
+            if (decoder.pendingBytes() > 0) {
+                lastPartialBlockNanos = now;
+            }
         }
     }
 
@@ -106,6 +111,14 @@ final class LinkInbox implements StreamDecoder.Sink, SerialTransport.Receiver {
     /** @return {@link System#nanoTime()} when the last byte arrived (or when the inbox was made) */
     long lastByteNanos() {
         return lastByteNanos;
+    }
+
+    /**
+     * @return {@link System#nanoTime()} when bytes last arrived while the decoder held part of a block (a block on
+     *         its way), or 0
+     */
+    long lastPartialBlockNanos() {
+        return lastPartialBlockNanos;
     }
 
     /** Forgets every event nobody waited for. */

@@ -78,9 +78,9 @@ final class SenderFaults {
         return applied.getOrDefault(fault, 0L);
     }
 
-    /** @return scheduled faults not yet applied */
+    /** @return faults scheduled or switched on and not yet applied (an armed byte drop counts as one) */
     synchronized int pending() {
-        return scheduled.size() + scheduledCorrupt + scheduledLose;
+        return scheduled.size() + scheduledCorrupt + scheduledLose + (dropBytes > 0 ? 1 : 0);
     }
 
     /**

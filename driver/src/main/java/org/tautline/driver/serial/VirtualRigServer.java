@@ -1,6 +1,7 @@
 package org.tautline.driver.serial;
 
 import java.nio.charset.StandardCharsets;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicLong;
@@ -201,7 +202,7 @@ public final class VirtualRigServer implements AutoCloseable {
         return faults.applied(fault);
     }
 
-    /** @return scheduled faults not yet injected */
+    /** @return faults scheduled or switched on and not yet injected */
     public int pendingFaults() {
         return faults.pending();
     }
@@ -288,9 +289,14 @@ public final class VirtualRigServer implements AutoCloseable {
 
     private void sendLoop() {
         try {
+            List<FaultSchedule.Entry> afterItem = new ArrayList<>();
             while (!closed) {
                 for (FaultSchedule.Entry e : faults.due(itemsSent.get())) {
-                    inject(e.fault(), e.parameter());
+                    if (e.fault() == InjectedFault.FORGET_HISTORY) {
+                        afterItem.add(e);
+                    } else {
+                        inject(e.fault(), e.parameter());
+                    }
                 }
                 if (closed) {
                     return;
@@ -313,6 +319,10 @@ public final class VirtualRigServer implements AutoCloseable {
                     log.add("notice", new String(item, StandardCharsets.US_ASCII).strip());
                 }
                 itemsSent.incrementAndGet();
+                for (FaultSchedule.Entry e : afterItem) {
+                    inject(e.fault(), e.parameter());
+                }
+                afterItem.clear();
             }
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();

@@ -4,16 +4,16 @@ import org.tautline.driver.spi.Rig;
 
 /** Test helper: link settings for fault tests, and log look-ups. */
 final class SerialLinks {
-    /** Silence that counts as a fault in {@link #quick()}, ms. */
-    static final int SILENCE_MS = 800;
+    /** Silence that counts as a fault in {@link #quick()}, ms: the serial driver's default, ample on a busy machine. */
+    static final int SILENCE_MS = 2000;
 
     private SerialLinks() {
     }
 
-    /** @return float64 blocks of 64 samples, 100 ms block timeout, 800 ms silence timeout */
+    /** @return float64 blocks of 64 samples, 300 ms block timeout, {@value #SILENCE_MS} ms silence timeout */
     static SerialLinkSettings quick() {
         return SerialLinkSettings.defaults().withFormat(SampleFormat.FLOAT64_LE).withBlockSamples(64)
-                .withBlockTimeoutMs(100).withReplyTimeoutMs(SILENCE_MS);
+                .withBlockTimeoutMs(300).withReplyTimeoutMs(SILENCE_MS);
     }
 
     /** Sine at 250 Hz, output on, ramp to the demo drive. */

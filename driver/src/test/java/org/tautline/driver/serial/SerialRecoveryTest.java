@@ -50,7 +50,8 @@ class SerialRecoveryTest {
             assertNull(rig.fault());
             assertTrue(rig.exciter().isOutputEnabled());
             switch (fault) {
-                case CRC_ONCE, BLOCK_LOST, BYTES_DROPPED_FROM_A_BLOCK -> assertEquals(1, rig.blocksRecovered());
+                // At least the damaged block; on a busy machine a slow block may be asked for again as well.
+                case CRC_ONCE, BLOCK_LOST, BYTES_DROPPED_FROM_A_BLOCK -> assertTrue(rig.blocksRecovered() >= 1);
                 case GARBAGE_BEFORE_A_BLOCK -> assertTrue(rig.strayByteEvents() > 0);
                 default -> assertTrue(server.log().stream().anyMatch(e -> e.kind().equals("fault")), server.log().toString());
             }
@@ -67,7 +68,7 @@ class SerialRecoveryTest {
             both.driveOn();
             both.readAndCheck(256);
             server.schedule(FaultSchedule.at(InjectedFault.CORRUPT_BLOCK, 3).and(FaultSchedule.at(
-                    InjectedFault.FORGET_HISTORY, 4)));
+                    InjectedFault.FORGET_HISTORY, 3)));
             long start = System.nanoTime();
             RigDataLostException e = assertThrows(RigDataLostException.class, () -> rig.acquisition().read(1024));
             long thrown = System.nanoTime();
