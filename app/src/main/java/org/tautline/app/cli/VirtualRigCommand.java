@@ -78,7 +78,8 @@ final class VirtualRigCommand implements Callable<Integer> {
         }
         PrintWriter out = spec.commandLine().getOut();
         VirtualRigSettings settings = VirtualRigSettings.of(baud).withPacing(pace).withLogFile(logFile);
-        try (VirtualRigServer server = VirtualRigServer.startOnPty(SimulationConfigs.demoWire(), settings)) {
+        VirtualRigServer server = VirtualRigServer.startOnPty(SimulationConfigs.demoWire(), settings);
+        try {
             out.println(server.hostPath());
             out.flush();
             System.err.println("tautline: serving the simulated demo wire on " + server.devicePath() + (pace
@@ -94,11 +95,18 @@ final class VirtualRigCommand implements Callable<Integer> {
                 String kind = faults.get(i).split("@")[0];
                 timer.schedule(() -> inject(server, kind), Math.round(delays.get(i) * 1000), TimeUnit.MILLISECONDS);
             }
+            // The hook itself closes the server: the JVM does not wait for this thread once a signal arrived, and
+            // closing switches the output off, kills socat and closes the log.
             CountDownLatch stop = new CountDownLatch(1);
-            Thread hook = new Thread(stop::countDown, "virtual-rig-stop");
+            Thread hook = new Thread(() -> {
+                timer.shutdownNow();
+                server.close();
+                stop.countDown();
+            }, "virtual-rig-stop");
             Runtime.getRuntime().addShutdownHook(hook);
             stop.await();
-            timer.shutdownNow();
+        } finally {
+            server.close();
         }
         return 0;
     }

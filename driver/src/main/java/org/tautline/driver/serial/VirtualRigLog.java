@@ -152,14 +152,16 @@ public final class VirtualRigLog implements AutoCloseable {
         return OptionalLong.empty();
     }
 
-    /** Closes the file, if any. */
+    /** Closes the file, if any; later entries go to memory only. Idempotent. */
     @Override
     public synchronized void close() {
-        if (file != null) {
+        if (file != null && !fileFailed) {
+            fileFailed = true;
             try {
                 file.close();
             } catch (IOException e) {
-                fileFailed = true;
+                // Every line was flushed as it was written; nothing is lost.
+                return;
             }
         }
     }
