@@ -96,20 +96,30 @@ final class CommandLink {
         }
     }
 
-    /** Asks for a status and waits at most waitMs for one showing the output off; never throws. */
+    /**
+     * Asks for a status and waits at most waitMs for one showing the output off. Half way through, or at once when a
+     * status still shows it on, it sends {@code DRIVE:OUT OFF} and the query once more, in case a line was lost on
+     * the way. Never throws.
+     */
     private boolean confirmOff(long waitMs) {
         try {
             long tag = nextTag++;
             transport.writeLine("LINK:STAT? " + tag);
             long start = System.nanoTime();
-            boolean again = true;
+            boolean resent = false;
             while (System.nanoTime() - start < waitMs * 1_000_000L) {
-                if (again && System.nanoTime() - start > waitMs * 500_000L) {
-                    again = false;
-                    transport.writeLine("LINK:STAT? " + tag);
-                }
+                boolean again = !resent && System.nanoTime() - start > waitMs * 500_000L;
                 if (inbox.poll(5) instanceof LinkEvent.Status s && s.status().tag() >= tag) {
-                    return !s.status().outputOn();
+                    if (!s.status().outputOn()) {
+                        return true;
+                    }
+                    again = !resent;
+                }
+                if (again) {
+                    resent = true;
+                    tag = nextTag++;
+                    transport.writeLine("DRIVE:OUT OFF");
+                    transport.writeLine("LINK:STAT? " + tag);
                 }
             }
         } catch (InterruptedException e) {
