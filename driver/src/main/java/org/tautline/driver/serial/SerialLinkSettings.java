@@ -6,8 +6,10 @@ import org.tautline.driver.RigException;
  * How {@link SerialRig} uses its link: baud rate, timeouts, sample format, block size and device watchdog.
  *
  * @param baud baud rate, bits per second; default 921600
- * @param replyTimeoutMs longest wait for a reply line, ms; default 1000
- * @param blockTimeoutMs longest wait for the next data block of a request, ms; default 1000
+ * @param replyTimeoutMs silence limit, ms: the device sending nothing at all for this long while the host waits is a
+ *        fault (PROTOCOL.md, section 12); default 1000
+ * @param blockTimeoutMs retry time, ms: a data block, reply or status still missing this long (plus the time one
+ *        block takes on the line) is asked for again; default 1000
  * @param format sample coding asked of the device; default {@link SampleFormat#FLOAT32_LE}
  * @param blockSamples samples per channel per data block ({@code ACQ:BLOCK}); default 1024
  * @param watchdogMs device watchdog ({@code LINK:WDOG}): the device switches its output off after this long
