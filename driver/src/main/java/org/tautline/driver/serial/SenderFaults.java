@@ -14,7 +14,8 @@ final class SenderFaults {
     /** The line a garbled reply becomes. */
     static final String GARBLED = "~~garbled~~";
 
-    private int dropBytes;
+    private int dropFromNextBlock;
+    private int dropFromNextItem;
     private int corruptTimes;
     private long corruptSequence = -1;
     private int loseTimes;
@@ -28,8 +29,9 @@ final class SenderFaults {
     private int scheduledLose;
     private final Map<InjectedFault, Long> applied = new EnumMap<>(InjectedFault.class);
 
+    /** @param count bytes to cut from the next data block */
     synchronized void dropBytes(int count) {
-        dropBytes = count;
+        dropFromNextBlock = count;
     }
 
     synchronized void corruptBlock(int times) {
@@ -80,7 +82,8 @@ final class SenderFaults {
 
     /** @return faults scheduled or switched on and not yet applied (an armed byte drop counts as one) */
     synchronized int pending() {
-        return scheduled.size() + scheduledCorrupt + scheduledLose + (dropBytes > 0 ? 1 : 0);
+        return scheduled.size() + scheduledCorrupt + scheduledLose + (dropFromNextBlock > 0 ? 1 : 0)
+                + (dropFromNextItem > 0 ? 1 : 0);
     }
 
     /**
@@ -94,7 +97,7 @@ final class SenderFaults {
         while (!scheduled.isEmpty() && scheduled.peek().item() <= item) {
             FaultSchedule.Entry e = scheduled.poll();
             switch (e.fault()) {
-                case DROP_BYTES -> dropBytes += e.parameter();
+                case DROP_BYTES -> dropFromNextItem += e.parameter();
                 case CORRUPT_BLOCK -> scheduledCorrupt++;
                 case LOSE_BLOCK -> scheduledLose++;
                 default -> out.add(e);
@@ -127,11 +130,11 @@ final class SenderFaults {
                     log.accept("garbled reply " + new String(item, StandardCharsets.US_ASCII).strip());
                     b = (GARBLED + "\n").getBytes(StandardCharsets.US_ASCII);
                 }
-                if (dropBytes > 0 && b.length > 1) {
-                    int cut = Math.min(dropBytes, b.length - 1);
+                if (dropFromNextItem > 0 && b.length > 1) {
+                    int cut = Math.min(dropFromNextItem, b.length - 1);
                     int at = cutPosition(b.length - 1 - cut);
                     b = cut(b, at, cut);
-                    dropBytes = 0;
+                    dropFromNextItem = 0;
                     count(InjectedFault.DROP_BYTES);
                     log.accept("drop-bytes " + cut + " from the line '" + new String(item, StandardCharsets.US_ASCII)
                             .strip() + "'");
@@ -169,10 +172,12 @@ final class SenderFaults {
                 count(InjectedFault.CORRUPT_BLOCK);
                 log.accept("corrupt-block " + sequence + " at byte " + b.length / 2);
             }
-            if (dropBytes > 0) {
-                int cut = Math.max(1, Math.min(dropBytes, b.length / 4));
+            int drop = dropFromNextItem + dropFromNextBlock;
+            if (drop > 0) {
+                int cut = Math.max(1, Math.min(drop, b.length / 4));
                 b = cut(b, cutPosition(b.length - cut), cut);
-                dropBytes = 0;
+                dropFromNextItem = 0;
+                dropFromNextBlock = 0;
                 count(InjectedFault.DROP_BYTES);
                 log.accept("drop-bytes " + cut + " from block " + sequence);
             }
