@@ -22,7 +22,7 @@ class SweepPlanFileTest {
     private static final String EXAMPLE = """
             {
               "startHz": 150, "stopHz": 800,
-              "levelMode": "force", "levels": [0.005, 0.01],
+              "levelMode": "force", "levels": [0.001, 0.002],
               "frequencyRelStd": 2e-5, "dampingRelStd": 0.02,
               "limits": {"driveV": 5, "forceN": 2, "responseAmplitude": 9e-4, "displacementM": 9e-4},
               "direction": "both",
@@ -43,7 +43,7 @@ class SweepPlanFileTest {
     void readsTheDocumentedExample() throws IOException {
         SweepPlan plan = SweepPlanFile.read(write(EXAMPLE));
         assertEquals(LevelMode.FORCE, plan.levelMode());
-        assertEquals(List.of(0.005, 0.01), plan.levels());
+        assertEquals(List.of(0.001, 0.002), plan.levels());
         assertEquals(List.of(SweepDirection.UP, SweepDirection.DOWN), plan.directions());
         assertEquals(4, plan.passCount());
         assertEquals(5.0, plan.limits().driveV());
@@ -87,7 +87,7 @@ class SweepPlanFileTest {
         e = assertThrows(AnalysisException.class, () -> SweepPlanFile.read(missing));
         assertEquals(missing + ", limits: field \"forceN\" is missing; expected a number", e.getMessage());
 
-        Path tooHigh = write(EXAMPLE.replace("[0.005, 0.01]", "[0.005, 3]"));
+        Path tooHigh = write(EXAMPLE.replace("[0.001, 0.002]", "[0.001, 3]"));
         e = assertThrows(AnalysisException.class, () -> SweepPlanFile.read(tooHigh));
         assertEquals(tooHigh + ": force level 3.0 N must be below limits.forceN 2.0 N", e.getMessage());
 

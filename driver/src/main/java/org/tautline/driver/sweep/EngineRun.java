@@ -58,14 +58,16 @@ final class EngineRun {
         final double startS;
         final List<SweepPoint> points = new ArrayList<>();
         final List<String> warnings = new ArrayList<>();
+        final LevelShortfalls shortfalls;
         double settleS;
         int repeatedSteps;
 
-        PassState(int index, StepPlanner planner, LevelController controller, double startS) {
+        PassState(int index, StepPlanner planner, LevelController controller, double startS, double driveLimitV) {
             this.index = index;
             this.planner = planner;
             this.controller = controller;
             this.startS = startS;
+            this.shortfalls = controller == null ? null : new LevelShortfalls(controller.targetN(), driveLimitV);
         }
     }
 
@@ -102,7 +104,7 @@ final class EngineRun {
                     : new UniformPlanner(plan, direction);
             LevelController controller = plan.levelMode() == LevelMode.FORCE
                     ? new LevelController(level, plan.levelTolerance(), plan.limits().driveV()) : null;
-            pass = new PassState(p, planner, controller, lastStepTimeS);
+            pass = new PassState(p, planner, controller, lastStepTimeS, plan.limits().driveV());
             runPass();
             endPass(null);
         }
@@ -196,7 +198,9 @@ final class EngineRun {
         pass.points.add(step.point());
         pass.settleS += step.settleS();
         lastStepTimeS = step.point().rigTimeS();
-        step.warning().ifPresent(pass.warnings::add);
+        if (pass.shortfalls != null) {
+            pass.shortfalls.add(step.point(), step.warning().isPresent());
+        }
         if (step.settleState() == SettleState.TIMED_OUT) {
             pass.warnings.add(String.format(Locale.ROOT, "settling timed out at %.2f Hz", step.point().frequencyHz()));
         }
@@ -227,6 +231,9 @@ final class EngineRun {
             return;
         }
         List<String> warnings = new ArrayList<>(pass.warnings);
+        if (pass.shortfalls != null) {
+            warnings.addAll(pass.shortfalls.warnings());
+        }
         warnings.addAll(pass.planner.warnings());
         if (pass.repeatedSteps > 0) {
             warnings.add(pass.repeatedSteps + " step(s) measured again after samples were lost on the link");

@@ -8,6 +8,7 @@ import java.util.function.DoubleSupplier;
 import org.hipparchus.complex.Complex;
 import org.tautline.analysis.signal.SineFit;
 import org.tautline.analysis.signal.SinePhasor;
+import org.tautline.driver.RigException;
 import org.tautline.driver.spi.Acquisition;
 import org.tautline.driver.spi.Exciter;
 import org.tautline.driver.spi.Rig;
@@ -163,7 +164,10 @@ final class StepExecutor {
         return (int) Math.max(16, Math.round(SettleDetector.blockCycles(tauS, f) * fs / f));
     }
 
-    /** Reads one block after checking for a stop, and checks it against the limits before anything else. */
+    /**
+     * Reads one block after checking for a stop, checks it against the limits before anything else, and discards it
+     * when a stop came, or the output went off, while it was read.
+     */
     SampleBlock checkedRead(int samples, double f) {
         String stop = control.reason();
         if (stop != null) {
@@ -173,6 +177,16 @@ final class StepExecutor {
         Optional<String> trip = plan.limits().check(block.samples(), responseQuantity, f);
         if (trip.isPresent()) {
             throw new SweepStop(true, trip.get());
+        }
+        // A stop that came during the read may have switched the output off part way through it (an emergency
+        // stop does so at once): such a block is never used.
+        stop = control.reason();
+        if (stop != null) {
+            throw new SweepStop(false, String.format(Locale.ROOT, "%s during the step at %.2f Hz", stop, f));
+        }
+        if (!rig.exciter().isOutputEnabled()) {
+            throw new RigException(String.format(Locale.ROOT, "the rig's output went off during the step at %.2f Hz"
+                    + " without being asked to; the step is discarded", f));
         }
         return block;
     }

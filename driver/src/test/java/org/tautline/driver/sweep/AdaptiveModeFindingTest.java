@@ -45,7 +45,7 @@ class AdaptiveModeFindingTest {
 
     /**
      * SWEEP_PLAN.md's example with the documented defaults for every field it leaves out, at one of its two force
-     * levels (0.005 and 0.01 N): each level is a pass of its own with a planner of its own.
+     * levels (0.001 and 0.002 N): each level is a pass of its own with a planner of its own.
      *
      * @param levelN the force level, N
      * @return the plan
@@ -57,7 +57,7 @@ class AdaptiveModeFindingTest {
     }
 
     /**
-     * One pass per seed, the example's levels taking turns (odd seeds 0.005 N, even seeds 0.01 N), keeps the test near
+     * One pass per seed, the example's levels taking turns (odd seeds 0.001 N, even seeds 0.002 N), keeps the test near
      * 20 s on one core; both levels of the example on all 20 seeds (40 passes) give the same outcome.
      */
     @ParameterizedTest(name = "seed {0}")
@@ -71,7 +71,7 @@ class AdaptiveModeFindingTest {
                     truth.add(t);
                 }
             }
-            SweepResult result = new SweepEngine(rig).run(examplePlan(seed % 2 == 1 ? 0.005 : 0.01),
+            SweepResult result = new SweepEngine(rig).run(examplePlan(seed % 2 == 1 ? 0.001 : 0.002),
                     SweepEventListener.NONE, SweepControl.none(), SweepJournal.NONE);
             assertEquals(SweepStatus.COMPLETED, result.status(), result.reason());
             pass = result.passes().get(0);

@@ -56,6 +56,6 @@ class SweepPlanTest {
         SweepPlan plan = SweepPlan.uniform(180, 1500, 1061, 250, 0.02, 100, 1, 0.2, 3, LIMITS);
         assertEquals("stepped sine 180.0 to 1500 Hz in 1061 log-spaced steps, settle 250.0 cycles (at least 0.02000 s),"
                 + " integrate 100 cycles, drive 1.000 V peak, ramp 0.2000 s, harmonics to order 3; limits: drive 5.000 V,"
-                + " force 10.00 N, response 1.000, displacement 1.000 m", plan.describe());
+                + " force 10.00 N, response 1.000 (sensor units), displacement 1.000 m", plan.describe());
     }
 }

@@ -59,6 +59,22 @@ class SweepSafetyTest {
     }
 
     @Test
+    void aStopThatArrivesDuringAStepsLastReadDiscardsThatStep() {
+        // The uniform plan reads each step's 40-cycle dwell in one block and its integration in a second: a stop that
+        // arrives while the fifth step's integration block is read (read 10) must not let that block be fitted, for
+        // an emergency stop may have switched the output off part way through it.
+        RecordingRig rig = new RecordingRig(new SimulatedRig(SweepFixtures.singlePolarisationWire()));
+        rig.readsBeforeCancel = 10;
+        RecordingJournal journal = new RecordingJournal();
+        SweepResult result = new SweepEngine(rig).run(uniformPlan(SweepFixtures.wideLimits()), SweepEventListener.NONE,
+                rig.control, journal);
+        assertEquals(SweepStatus.CANCELLED, result.status());
+        assertEquals(10, rig.blockPeaks.size(), "two reads per step, the stop on the fifth step's second");
+        assertEquals(4, journal.steps.size(), "the step whose last block was read during the stop is not recorded");
+        assertEquals(4, result.points().size());
+    }
+
+    @Test
     void aCancelMidStepLeavesTheOutputOffAndTheJournalConsistent() {
         RecordingRig rig = new RecordingRig(new SimulatedRig(SweepFixtures.singlePolarisationWire()));
         rig.readsBeforeCancel = 30;
