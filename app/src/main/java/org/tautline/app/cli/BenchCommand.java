@@ -21,7 +21,7 @@ import picocli.CommandLine.Model.CommandSpec;
 @Command(name = "bench", mixinStandardHelpOptions = true,
         description = "Run a benchmark and print its figures.",
         subcommands = {BenchCommand.Simulator.class, BenchCommand.FrfFromWav.class, BenchCommand.Modal.class,
-                BenchCommand.Serial.class, BenchCommand.Sweep.class})
+                BenchCommand.Serial.class, BenchCommand.Sweep.class, StopSignalBench.class})
 final class BenchCommand implements Runnable {
     @Spec
     private CommandSpec spec;
