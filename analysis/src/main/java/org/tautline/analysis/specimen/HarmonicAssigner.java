@@ -91,6 +91,19 @@ public final class HarmonicAssigner {
     }
 
     /**
+     * Sets how far the numbering's first natural frequency may lie from the approximate one given to
+     * {@link #assign}, relative (0.2 = within 20 %).
+     *
+     * @param relative 0..1, default 0.2
+     * @return a new assigner
+     */
+    public HarmonicAssigner withFundamentalTolerance(double relative) {
+        require(relative > 0 && relative < 1, "fundamental tolerance must lie between 0 and 1, got " + relative);
+        return new HarmonicAssigner(nodeThreshold, splitTolerance, harmonicTolerance, maxHarmonic, maxInharmonicity,
+                relative);
+    }
+
+    /**
      * Sets the highest harmonic number tried.
      *
      * @param highest 1..500, default 60
@@ -108,7 +121,7 @@ public final class HarmonicAssigner {
      * @param specimen the specimen (positions, nominal stiffness)
      * @param modes fitted modes, any order
      * @param approximateF1Hz approximate first natural frequency, Hz, or {@code NaN} when not known; the
-     *     numbering's f1 is then kept within 20 % of it
+     *     numbering's f1 is then kept within the fundamental tolerance (20 % unless set) of it
      * @param bandLowHz lowest frequency of the measured band, Hz
      * @param bandHighHz highest frequency of the measured band, Hz
      * @return the numbering and the absent harmonics
@@ -131,8 +144,9 @@ public final class HarmonicAssigner {
             }
         }
         if (best == null) {
-            throw new AnalysisException("no harmonic series with f1 within 20 % of " + approximateF1Hz
-                    + " Hz and B up to " + maxInharmonicity + " fits the " + modes.size() + " modes");
+            throw new AnalysisException(String.format(java.util.Locale.ROOT, "no harmonic series with f1 within %.0f %%"
+                    + " of %.4g Hz and B up to %s fits the %d modes", 100 * fundamentalTolerance, approximateF1Hz,
+                    maxInharmonicity, modes.size()));
         }
         return result(best, clusters, specimen, bandLowHz, bandHighHz);
     }

@@ -59,18 +59,28 @@ final class ModeCluster {
         return members.get(member).mode().frequencyHz();
     }
 
-    /** @return the mean frequency of the members, Hz */
+    /**
+     * The frequency that stands for the cluster: its strongest member's (largest |modal constant|).
+     *
+     * <p>The two polarisations of a doublet see slightly different end stiffness (that is what splits them), so they
+     * do not lie on one stiff-string line, and the drive excites the same one most at every harmonic (its direction
+     * against the principal axes does not change). The strongest member therefore lies on one line from harmonic to
+     * harmonic, also where the fit found only one member of a doublet; the mean of the members would not, and a
+     * doublet found whole beside one found half could then look like a negative inharmonicity.
+     *
+     * @return the strongest member's frequency, Hz
+     */
     double frequencyHz() {
-        return members.stream().mapToDouble(m -> m.mode().frequencyHz()).average().orElseThrow();
+        return strongest().mode().frequencyHz();
     }
 
-    /** @return standard error used to weight the cluster: that of the mean, at least 1e-7 of the frequency, Hz */
+    /** @return standard error used to weight the cluster: the strongest member's, at least 1e-7 of the frequency, Hz */
     double frequencyStdHz() {
-        double sum = 0;
-        for (FittedMode m : members) {
-            double s = m.frequencyStdHz();
-            sum += Double.isFinite(s) && s > 0 ? s * s : 0;
-        }
-        return Math.max(Math.sqrt(sum) / members.size(), 1e-7 * frequencyHz());
+        double s = strongest().frequencyStdHz();
+        return Math.max(Double.isFinite(s) && s > 0 ? s : 0, 1e-7 * frequencyHz());
+    }
+
+    private FittedMode strongest() {
+        return members.stream().max(Comparator.comparingDouble(m -> m.mode().modalConstant().norm())).orElseThrow();
     }
 }

@@ -58,6 +58,20 @@ public record Verdict(Outcome outcome, List<LimitResult> results, List<String> r
      * @return the verdict with one result and one reason per limit
      */
     public static Verdict evaluate(Specification specification, Map<String, Measurement> measurements) {
+        return evaluate(specification, measurements, Map.of());
+    }
+
+    /**
+     * Checks measured figures against a specification, saying why a figure that was not measured is missing.
+     *
+     * @param specification the limits
+     * @param measurements measured figures by key; figures the specification does not mention are ignored
+     * @param whyNotMeasured for figures that could not be measured here, why, in a plain clause (for example
+     *        {@code "it needs the rig: ..."}); a missing figure with no entry is simply "not measured"
+     * @return the verdict with one result and one reason per limit
+     */
+    public static Verdict evaluate(Specification specification, Map<String, Measurement> measurements,
+                                   Map<String, String> whyNotMeasured) {
         if (specification == null) {
             throw new AnalysisException("a verdict needs a specification, got none");
         }
@@ -69,7 +83,7 @@ public record Verdict(Outcome outcome, List<LimitResult> results, List<String> r
         boolean anyFail = false;
         boolean anyUndecided = false;
         for (Limit limit : specification.limits()) {
-            LimitResult result = check(limit, measurements.get(limit.figureKey()));
+            LimitResult result = check(limit, measurements.get(limit.figureKey()), whyNotMeasured.get(limit.figureKey()));
             results.add(result);
             reasons.add(result.reason());
             anyFail |= result.outcome() == Outcome.FAIL;
@@ -97,11 +111,11 @@ public record Verdict(Outcome outcome, List<LimitResult> results, List<String> r
         return new Verdict(Outcome.NOT_DETERMINABLE, results, all);
     }
 
-    private static LimitResult check(Limit limit, Measurement measurement) {
+    private static LimitResult check(Limit limit, Measurement measurement, String whyNotMeasured) {
         String key = limit.figureKey();
         if (measurement == null) {
             return new LimitResult(limit, Double.NaN, Double.NaN, Double.NaN, Outcome.NOT_DETERMINABLE,
-                    "no measured value for " + key);
+                    "no measured value for " + key + (whyNotMeasured == null ? "" : ": " + whyNotMeasured));
         }
         double v = measurement.value();
         double u = measurement.standardUncertainty();

@@ -23,7 +23,10 @@ import picocli.CommandLine.Model.CommandSpec;
 /** {@code tautline demo}: qualifies the invented demo wire on the simulated rig. */
 @Command(name = "demo", mixinStandardHelpOptions = true,
         description = "Qualify the built-in demo specimen (invented) on the simulated rig and compare every estimate"
-                + " with the simulated truth.")
+                + " with the simulated truth.",
+        exitCodeListHeading = "%nExit status:%n",
+        exitCodeList = {"0:PASS", "1:an error", "3:the sweep was stopped", "4:a safety limit stopped the sweep",
+                "5:a fault stopped the sweep", "10:FAIL", "11:NOT_DETERMINABLE"})
 final class DemoCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
@@ -77,7 +80,7 @@ final class DemoCommand implements Callable<Integer> {
         } else if (lot != null) {
             throw new org.tautline.analysis.AnalysisException("--lot needs --out DIR: the register keeps where the run's files are");
         }
-        return 0;
+        return ExitCodes.of(outcome.result().verdict());
     }
 
     private static void write(DemoOutcome outcome, Path dir) throws IOException {

@@ -2,6 +2,7 @@ package org.tautline.app.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.Optional;
@@ -16,10 +17,13 @@ import org.tautline.analysis.modal.FittedMode;
 import org.tautline.analysis.modal.ModalEstimate;
 import org.tautline.analysis.modal.ModalEstimator;
 import org.tautline.analysis.modal.Mode;
+import org.tautline.analysis.specimen.LinearityResult;
 import org.tautline.analysis.specimen.Specimen;
 import org.tautline.analysis.verdict.Specification;
 import org.tautline.app.qualify.Qualification;
 import org.tautline.app.qualify.QualificationResult;
+import org.tautline.app.report.LevelCheckFile;
+import org.tautline.app.report.RunDirectory;
 import org.tautline.app.qualify.ResultText;
 import org.tautline.app.qualify.SpecificationFile;
 import org.tautline.app.qualify.SpecimenFile;
@@ -32,7 +36,12 @@ import picocli.CommandLine.Model.CommandSpec;
 @Command(name = "fit", mixinStandardHelpOptions = true,
         description = "Fit a damped modal model to an FRF CSV file (poles by LSCF with automatic mode choice, modal"
                 + " constants by LSFD, joint refinement with standard errors). With --specimen, also number the"
-                + " harmonics and read tension, bending stiffness and positions; with --spec, judge them.")
+                + " harmonics and read tension, bending stiffness and positions; with --spec, judge them. The level"
+                + " check needs the rig: its figure is read from the run's result.json beside the FRF file (or"
+                + " --level-check FILE) when there is one.",
+        exitCodeListHeading = "%nExit status:%n",
+        exitCodeList = {"0:PASS, or no --spec given", "1:an error (a file that cannot be read, a bad option)",
+                "10:FAIL", "11:NOT_DETERMINABLE"})
 final class FitCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
@@ -51,6 +60,11 @@ final class FitCommand implements Callable<Integer> {
 
     @Option(names = "--spec", paramLabel = "SPEC.json", description = "The specification to judge against (needs --specimen).")
     private Path specificationFile;
+
+    @Option(names = "--level-check", paramLabel = "RESULT.json",
+            description = "The run's result.json holding the level check (default: result.json beside the FRF file,"
+                    + " when there is one).")
+    private Path levelCheckFile;
 
     @Option(names = "--json", description = "Print the result as JSON.")
     private boolean json;
@@ -76,11 +90,25 @@ final class FitCommand implements Callable<Integer> {
                     : Optional.of(SpecificationFile.read(specificationFile));
             QualificationResult result = Qualification.analyse(specimen, frf, Optional.empty(), estimator, specification,
                     System.nanoTime());
+            Path recorded = levelCheckFile != null ? levelCheckFile
+                    : frfFile.toAbsolutePath().resolveSibling(RunDirectory.RESULT);
+            if (levelCheckFile != null && !Files.isRegularFile(levelCheckFile)) {
+                throw new AnalysisException("--level-check " + levelCheckFile + ": no such file; expected a run's"
+                        + " result.json");
+            }
+            Optional<LinearityResult> linearity = LevelCheckFile.read(recorded);
+            if (linearity.isPresent()) {
+                result = Qualification.withLinearity(result, linearity.get(), specification);
+                spec.commandLine().getErr().println("tautline: the level check (it needs the rig) was read from "
+                        + recorded);
+            }
             out.print(json ? ResultJson.MAPPER.writeValueAsString(ResultJson.result(result)) + "\n"
                     : ResultText.format(result, Optional.empty()));
+            out.flush();
+            return ExitCodes.of(result.verdict());
         }
         out.flush();
-        return 0;
+        return ExitCodes.OK;
     }
 
     static double[] parseBand(String text) {

@@ -25,7 +25,11 @@ import picocli.CommandLine.Model.CommandSpec;
 /** {@code tautline lot}: per-figure statistics of a lot from the register; {@code --add} appends a run first. */
 @Command(name = "lot", mixinStandardHelpOptions = true,
         description = "Print per-figure statistics of a lot from the lot register (n, mean, std, min, max, Cpk against"
-                + " the specification) with its individuals-chart limits. --add RUNDIR appends a run first.")
+                + " the specification) with its individuals-chart limits. --add RUNDIR appends a run first.",
+        exitCodeListHeading = "%nExit status:%n",
+        exitCodeList = {"0:done; with --add, the added run's verdict is PASS (or it has no specification)",
+                "1:an error", "10:with --add, the added run's verdict is FAIL",
+                "11:with --add, the added run's verdict is NOT_DETERMINABLE"})
 final class LotCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
@@ -58,9 +62,12 @@ final class LotCommand implements Callable<Integer> {
                     + " does not exist; expected --register FILE|URL naming a lot register, or --add RUNDIR to start one");
         }
         List<LotEntry> entries;
+        int status = ExitCodes.OK;
         try (LotRegister r = LotRegister.open(location)) {
             if (add != null) {
-                r.append(LotEntries.of(lot, RunDirectory.read(add).result(), add.toAbsolutePath().toString(), Instant.now()));
+                RunDirectory run = RunDirectory.read(add);
+                r.append(LotEntries.of(lot, run.result(), add.toAbsolutePath().toString(), Instant.now()));
+                status = ExitCodes.of(run.result().verdict());
             }
             entries = r.entries(lot);
         }
@@ -81,7 +88,7 @@ final class LotCommand implements Callable<Integer> {
             }
         }
         out.flush();
-        return 0;
+        return status;
     }
 
     private static ObjectNode json(List<FigureStatistics> statistics) {

@@ -19,7 +19,9 @@ import picocli.CommandLine.Parameters;
 /** {@code tautline report}: the PDF report of a run directory, qualified again from its files. */
 @Command(name = "report", mixinStandardHelpOptions = true,
         description = "Write the PDF report of a run directory (frf.csv, specimen.json, spec.json), qualifying it"
-                + " again from its files. With --lot, the report also charts that lot from the register.")
+                + " again from its files. With --lot, the report also charts that lot from the register.",
+        exitCodeListHeading = "%nExit status (the report is written in each case but an error):%n",
+        exitCodeList = {"0:PASS, or no specification", "1:an error", "10:FAIL", "11:NOT_DETERMINABLE"})
 final class ReportCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "RUNDIR", description = "The run directory, as demo --out writes it.")
     private Path runDir;
@@ -50,6 +52,6 @@ final class ReportCommand implements Callable<Integer> {
         QualificationReport.write(run, new ReportInfo(operator, ReportInfo.SOFTWARE, Instant.now()), lot == null ? "" : lot,
                 statistics, pdf);
         System.err.println("tautline: wrote the report to " + pdf);
-        return 0;
+        return ExitCodes.of(run.result().verdict());
     }
 }

@@ -105,6 +105,8 @@ final class ResultJson {
             root.put("sweepCompleted", sweep.completed());
         });
         root.put("wallTimeS", r.wallTimeS());
+        ArrayNode cautions = root.putArray("cautions");
+        r.cautions().forEach(cautions::add);
         r.verdict().ifPresent(v -> root.set("verdict", verdict(v)));
         return root;
     }

@@ -16,7 +16,6 @@ import org.tautline.analysis.modal.ModalSynthesis;
 import org.tautline.analysis.modal.ModeSelection;
 import org.tautline.analysis.modal.Mode;
 import org.tautline.analysis.specimen.AssignedMode;
-import org.tautline.analysis.specimen.HarmonicAssigner;
 import org.tautline.analysis.specimen.HarmonicAssignment;
 import org.tautline.analysis.specimen.LinearityResult;
 import org.tautline.analysis.specimen.NumberedFrequency;
@@ -42,6 +41,11 @@ import org.tautline.driver.sweep.SweepResult;
  * {@code fitNormalisedResidual} and, when the FRF carries its variance, {@code resonanceFrfRelativeStdError}.
  */
 public final class Qualification {
+    /** The figure of the level check. */
+    static final String LEVEL_SHIFT = "linearityShift1";
+    /** Why an analysis of an FRF file alone has no level-check figure. */
+    static final String LEVEL_CHECK_NEEDS_THE_RIG = "the level check needs the rig (it sweeps the fundamental at two"
+            + " drive levels), so an FRF file alone cannot give it; the run's result.json holds it when the rig ran it";
     /** Doublets: two polarisations of one harmonic lie within this relative split (a few half-power bandwidths). */
     private static final double DOUBLET_SPLIT = 0.02;
 
@@ -108,8 +112,13 @@ public final class Qualification {
                                                  ModalEstimate modal, Optional<Specification> specification,
                                                  long wallStartNs) {
         List<FittedMode> fitted = modal.modes();
-        HarmonicAssignment harmonics = new HarmonicAssigner().withSplitTolerance(DOUBLET_SPLIT)
-                .assign(specimen, fitted, Double.NaN, modal.bandLowHz(), modal.bandHighHz());
+        Numbering.Outcome numbering = Numbering.number(specimen, fitted, modal.bandLowHz(), modal.bandHighHz(),
+                DOUBLET_SPLIT);
+        HarmonicAssignment harmonics = numbering.harmonics();
+        List<String> cautions = new ArrayList<>();
+        sweep.filter(s -> !s.completed()).ifPresent(s -> cautions.add("the sweep " + s.status().label()
+                + " before its end (" + s.reason() + "), so its FRF lacks the steps not run"));
+        numbering.refusal().ifPresent(cautions::add);
         List<QualifiedMode> modes = new ArrayList<>();
         for (int i = 0; i < fitted.size(); i++) {
             modes.add(new QualifiedMode(fitted.get(i), harmonics.harmonicOf(i), polarisationOf(harmonics, i)));
@@ -127,11 +136,11 @@ public final class Qualification {
             participation = Optional.empty();
         }
         Map<String, Measurement> measured = measurements(modes, tension, participation, modal, receptance);
-        Optional<Verdict> verdict = judge(specification, measured, sweep);
+        Optional<Verdict> verdict = judge(specification, measured, cautions, sweep.isPresent());
         Frf synthesized = ModalSynthesis.synthesize(modal.plainModes(), receptance.frequenciesHz(), FrfQuantity.RECEPTANCE);
         double wallS = (System.nanoTime() - wallStartNs) * 1e-9;
         return new QualificationResult(specimen, sweep, receptance, synthesized, modal, modes, harmonics, tension,
-                participation, Optional.empty(), measured, verdict, wallS);
+                participation, Optional.empty(), measured, verdict, wallS, cautions);
     }
 
     /**
@@ -147,23 +156,24 @@ public final class Qualification {
                                                     Optional<Specification> specification) {
         Map<String, Measurement> measured = new LinkedHashMap<>(result.measurements());
         linearity.shifts().stream().filter(s -> s.harmonic() == 1).findFirst().ifPresent(s -> putKnown(measured,
-                "linearityShift1", s.relativeShift(), s.relativeShiftStd(), ""));
-        Optional<Verdict> verdict = judge(specification, measured, result.sweep());
+                LEVEL_SHIFT, s.relativeShift(), s.relativeShiftStd(), ""));
+        Optional<Verdict> verdict = judge(specification, measured, result.cautions(), true);
         return new QualificationResult(result.specimen(), result.sweep(), result.receptance(), result.synthesized(),
                 result.modal(), result.modes(), result.harmonics(), result.tension(), result.participation(),
-                Optional.of(linearity), measured, verdict, result.wallTimeS());
+                Optional.of(linearity), measured, verdict, result.wallTimeS(), result.cautions());
     }
 
     /**
-     * The verdict on the figures; NOT_DETERMINABLE whatever they say when they come from a sweep that stopped before
-     * its end (its FRF lacks the steps not run, so modes may be missing and the harmonic numbering wrong).
+     * The verdict on the figures; NOT_DETERMINABLE whatever they say when the result carries cautions (a sweep that
+     * stopped before its end lacks steps, so modes may be missing and the numbering wrong; modes that could not be
+     * numbered; a fit that does not explain the data), each caution a reason, in order, before the limits' own.
      */
     private static Optional<Verdict> judge(Optional<Specification> specification, Map<String, Measurement> measured,
-                                           Optional<SweepResult> sweep) {
-        Optional<Verdict> verdict = specification.map(spec -> Verdict.evaluate(spec, measured));
-        if (sweep.isPresent() && !sweep.get().completed()) {
-            String why = "not determinable: the sweep " + sweep.get().status().label() + " before its end ("
-                    + sweep.get().reason() + "), so its FRF lacks the steps not run";
+                                           List<String> cautions, boolean fromRig) {
+        Map<String, String> whyNotMeasured = fromRig ? Map.of() : Map.of(LEVEL_SHIFT, LEVEL_CHECK_NEEDS_THE_RIG);
+        Optional<Verdict> verdict = specification.map(spec -> Verdict.evaluate(spec, measured, whyNotMeasured));
+        for (int i = cautions.size() - 1; i >= 0; i--) {
+            String why = "not determinable: " + cautions.get(i);
             verdict = verdict.map(v -> v.undetermined(why));
         }
         return verdict;

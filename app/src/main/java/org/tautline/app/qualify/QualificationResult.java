@@ -30,16 +30,20 @@ import org.tautline.driver.sweep.SweepResult;
  * @param measurements every figure the verdict may judge, by key
  * @param verdict the verdict against the specification, absent when no specification was given
  * @param wallTimeS wall-clock time of the qualification, s
+ * @param cautions why the result cannot be trusted as a whole, one plain sentence each (a sweep stopped before
+ *        its end, modes that could not be numbered as the stated specimen's harmonics, a fit that does not explain
+ *        the data); when there are any, the verdict is NOT_DETERMINABLE and says why
  */
 public record QualificationResult(Specimen specimen, Optional<SweepResult> sweep, Frf receptance, Frf synthesized,
                                   ModalEstimate modal, List<QualifiedMode> modes, HarmonicAssignment harmonics,
                                   Optional<TensionEstimate> tension, Optional<PatternFit> participation,
-                                  Optional<LinearityResult> linearity, java.util.Map<String, Measurement> measurements, Optional<Verdict> verdict,
-                                  double wallTimeS) {
+                                  Optional<LinearityResult> linearity, java.util.Map<String, Measurement> measurements,
+                                  Optional<Verdict> verdict, double wallTimeS, List<String> cautions) {
 
     /** Copies the collections. */
     public QualificationResult {
         modes = List.copyOf(modes);
+        cautions = List.copyOf(cautions);
         measurements = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(measurements));
     }
 }

@@ -50,6 +50,10 @@ public final class ResultText {
         }
         r.modal().warnings().forEach(w -> out.append("  note: ").append(w).append('\n'));
         appendProperties(out, r, truth);
+        if (!r.cautions().isEmpty()) {
+            out.append(String.format(Locale.ROOT, "%nCautions (the result cannot be trusted as a whole)%n"));
+            r.cautions().forEach(c -> out.append("  ").append(c).append('\n'));
+        }
         r.verdict().ifPresent(verdict -> {
             out.append(String.format(Locale.ROOT, "%nVerdict: %s%n", verdict.outcome()));
             for (LimitResult limit : verdict.results()) {

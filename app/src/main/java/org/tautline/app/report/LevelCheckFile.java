@@ -17,11 +17,16 @@ import org.tautline.analysis.specimen.LinearityResult;
  * The level check of a run, read back from the {@code linearity} block of its {@code result.json}: the check
  * needs the rig, so a report cannot repeat it and takes the recorded shifts instead.
  */
-final class LevelCheckFile {
+public final class LevelCheckFile {
     private LevelCheckFile() {
     }
 
-    static Optional<LinearityResult> read(Path resultJson) throws IOException {
+    /**
+     * @param resultJson a run's result.json
+     * @return the recorded level check; empty when the file is absent or holds none
+     * @throws IOException when the file cannot be read
+     */
+    public static Optional<LinearityResult> read(Path resultJson) throws IOException {
         if (!Files.isRegularFile(resultJson)) {
             return Optional.empty();
         }

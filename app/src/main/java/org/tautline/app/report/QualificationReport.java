@@ -102,6 +102,9 @@ public final class QualificationReport {
         Color colour = outcome == Outcome.PASS ? new Color(0, 110, 70) : outcome == Outcome.FAIL ? new Color(180, 40, 0)
                 : new Color(150, 100, 0);
         w.boldLine("Verdict: " + outcome, 13, colour);
+        for (String caution : r.cautions()) {
+            w.line("Not determinable as a whole: " + caution, 9);
+        }
     }
 
     private static void specimen(PageWriter w, Specimen s) {

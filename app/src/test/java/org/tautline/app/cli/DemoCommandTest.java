@@ -75,11 +75,34 @@ class DemoCommandTest {
             }
         }
         assertEquals(root.get("properties").get("tensionN"), fitted.get("properties").get("tensionN"));
-        // From files alone there is no second test level, so only the level-shift limit cannot be judged.
-        assertEquals("NOT_DETERMINABLE", fitted.get("verdict").get("outcome").asText());
-        for (JsonNode limit : fitted.get("verdict").get("limits")) {
-            boolean level = "linearityShift1".equals(limit.get("figure").asText());
-            assertEquals(level ? "NOT_DETERMINABLE" : "PASS", limit.get("outcome").asText(), limit.toString());
+        // The level check needs the rig; fit reads its figure from the run's result.json beside frf.csv, so the
+        // verdict from the files is the demo's own.
+        assertEquals(root.get("verdict").get("outcome"), fitted.get("verdict").get("outcome"));
+        assertEquals(ExitCodes.of(java.util.Optional.empty()) + ("PASS".equals(root.get("verdict").get("outcome")
+                .asText()) ? 0 : 11), fit.exitCode(), "the exit status is the verdict's");
+        assertTrue(fit.err().contains("the level check (it needs the rig) was read from"), fit.err());
+
+        // A specification the wire fails: the exit status says FAIL.
+        Path failing = dir.resolve("failing-spec.json");
+        Files.writeString(failing, "{\"name\": \"a tighter tie wire, invented\", \"limits\": [{\"name\": \"tension\","
+                + " \"figure\": \"tensionN\", \"unit\": \"N\", \"lower\": 100, \"upper\": 120}]}");
+        CliRun fails = CliRun.of("fit", "--frf", runDir.resolve("frf.csv").toString(), "--specimen",
+                runDir.resolve("specimen.json").toString(), "--spec", failing.toString());
+        assertEquals(ExitCodes.VERDICT_FAIL, fails.exitCode(), fails.out() + fails.err());
+
+        // Without the run's result.json the level-check limit says plainly that it needs the rig.
+        Path alone = dir.resolve("alone");
+        Files.createDirectories(alone);
+        Files.copy(runDir.resolve("frf.csv"), alone.resolve("frf.csv"));
+        CliRun bare = CliRun.of("fit", "--frf", alone.resolve("frf.csv").toString(), "--specimen",
+                runDir.resolve("specimen.json").toString(), "--spec", runDir.resolve("spec.json").toString(), "--json");
+        assertEquals(ExitCodes.VERDICT_NOT_DETERMINABLE, bare.exitCode(), bare.err());
+        JsonNode bareJson = ResultJson.MAPPER.readTree(bare.out());
+        for (JsonNode limit : bareJson.get("verdict").get("limits")) {
+            if ("linearityShift1".equals(limit.get("figure").asText())) {
+                assertEquals("NOT_DETERMINABLE", limit.get("outcome").asText());
+                assertTrue(limit.get("reason").asText().contains("the level check needs the rig"), limit.toString());
+            }
         }
         assertTrue(fitted.get("residuals").get("upper").has("re"));
         assertTrue(fitted.get("quality").get("normalisedResidual").asDouble() < 0.1);

@@ -32,6 +32,42 @@ class DemoQualificationTest {
         outcome = DemoRun.run(SweepEventListener.NONE, SweepControl.none());
     }
 
+    /** The demo wire as stated, but with another nominal tension (the same mass per length and span). */
+    private static Specimen statedAt(double tensionN) {
+        Specimen s = DemoScenario.specimen();
+        return new Specimen(s.id(), s.lengthM(), s.linearDensityKgPerM(), s.linearDensityStdKgPerM(),
+                s.bendingStiffnessNm2(), s.bendingStiffnessStdNm2(), s.ends(), s.forcingPositionM(), s.sensorPositionM(),
+                tensionN, 0.0, 0.0, s.axialStiffnessN(), java.util.Optional.empty());
+    }
+
+    @Test
+    void aSubBandNumbersItsModesAsTheHarmonicsTheStatedTensionAllows() {
+        // 200 .. 500 Hz holds harmonics 1 and 2 (both polarisations); unchecked, the numbering once called the 225.6 Hz
+        // mode harmonic 8 and read a tension of 2 N against the stated 150 N.
+        QualificationResult r = Qualification.analyse(DemoScenario.specimen(), outcome.result().receptance(),
+                java.util.Optional.empty(), org.tautline.analysis.modal.ModalEstimator.defaults().withBand(200, 500),
+                java.util.Optional.of(DemoScenario.specification()), System.nanoTime());
+        assertEquals(1, Qualification.dominant(r.modes(), 1).orElseThrow().harmonic());
+        assertEquals(DemoScenario.TRUE_TENSION_N, r.tension().orElseThrow().tensionN(), 0.02 * DemoScenario.TRUE_TENSION_N,
+                "Mersenne's law from harmonics 1 and 2 (Fletcher 1964 line fit)");
+        assertTrue(r.cautions().isEmpty(), r.cautions().toString());
+    }
+
+    @Test
+    void aNumberingFarFromTheStatedTensionIsRefusedAndTheVerdictIsNotDeterminableNotFail() {
+        // Stated 40 N: f1 would be near 118 Hz, where the 225.6 Hz mode could only be harmonic 2 with every odd
+        // harmonic missing at no node, or nothing at all.
+        for (double stated : new double[] {40.0, 600.0}) {
+            QualificationResult r = Qualification.analyse(statedAt(stated), outcome.result().receptance(),
+                    java.util.Optional.empty(), org.tautline.analysis.modal.ModalEstimator.defaults(),
+                    java.util.Optional.of(DemoScenario.specification()), System.nanoTime());
+            assertFalse(r.cautions().isEmpty(), "stated " + stated + " N: the numbering is refused");
+            assertEquals(Outcome.NOT_DETERMINABLE, r.verdict().orElseThrow().outcome(), "never a confident FAIL");
+            assertTrue(r.verdict().get().reasons().get(0).startsWith("not determinable: the "), r.verdict().get()
+                    .reasons().get(0));
+        }
+    }
+
     @Test
     void findsTheFirstSixHarmonicsWithinOneTenthOfAPercent() {
         for (int n = 1; n <= 6; n++) {
