@@ -78,6 +78,14 @@ public final class JsonFields {
         return value == null ? "null" : value.toString();
     }
 
+    /**
+     * @param field a field
+     * @return true when the object holds the field with the value {@code null} (not when the field is left out)
+     */
+    public boolean holdsNull(String field) {
+        return node.has(field) && node.get(field).isNull();
+    }
+
     public boolean has(String field) {
         return node.has(field) && !node.get(field).isNull();
     }
