@@ -15,9 +15,10 @@ import org.tautline.analysis.AnalysisException;
  * @param id identifier of the specimen, for reports; not blank
  * @param lengthM vibrating length L between the supports, m
  * @param linearDensityKgPerM mass per unit length mu, kg/m
- * @param linearDensityStdKgPerM standard uncertainty of mu, kg/m (0 when not stated)
+ * @param linearDensityStdKgPerM standard uncertainty of mu, kg/m; NaN when declared not evaluated (every figure that
+ *        depends on it then has an unknown uncertainty and is never judged to pass)
  * @param bendingStiffnessNm2 bending stiffness EI, N m^2 (0 when unknown or negligible)
- * @param bendingStiffnessStdNm2 standard uncertainty of EI, N m^2 (0 when not stated)
+ * @param bendingStiffnessStdNm2 standard uncertainty of EI, N m^2; NaN when declared not evaluated
  * @param ends how the ends are held
  * @param forcingPositionM x_f, where the shaker drives through the force sensor, strictly inside the span, m
  * @param sensorPositionM x_s, where the response is sensed, strictly inside the span, m
@@ -40,9 +41,9 @@ public record Specimen(String id, double lengthM, double linearDensityKgPerM, do
         }
         positive("lengthM", lengthM, "m");
         positive("linearDensityKgPerM", linearDensityKgPerM, "kg/m");
-        nonNegative("linearDensityStdKgPerM", linearDensityStdKgPerM, "kg/m");
+        uncertainty("linearDensityStdKgPerM", linearDensityStdKgPerM, "kg/m");
         nonNegative("bendingStiffnessNm2", bendingStiffnessNm2, "N m^2");
-        nonNegative("bendingStiffnessStdNm2", bendingStiffnessStdNm2, "N m^2");
+        uncertainty("bendingStiffnessStdNm2", bendingStiffnessStdNm2, "N m^2");
         Objects.requireNonNull(ends, "specimen ends must be given (PINNED or CLAMPED)");
         inside("forcingPositionM", forcingPositionM, lengthM);
         inside("sensorPositionM", sensorPositionM, lengthM);
@@ -162,6 +163,18 @@ public record Specimen(String id, double lengthM, double linearDensityKgPerM, do
             throw new AnalysisException("specimen " + field + " must be a positive finite number of " + unit
                     + ", got " + value);
         }
+    }
+
+    /** A standard uncertainty: zero or more, or NaN for one declared not evaluated. */
+    private static void uncertainty(String field, double value, String unit) {
+        if (!Double.isNaN(value)) {
+            nonNegative(field, value, unit);
+        }
+    }
+
+    /** @return true when the uncertainty of the mass per length was declared not evaluated */
+    public boolean linearDensityUncertaintyUnknown() {
+        return Double.isNaN(linearDensityStdKgPerM);
     }
 
     private static void nonNegative(String field, double value, String unit) {

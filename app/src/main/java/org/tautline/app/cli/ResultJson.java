@@ -227,9 +227,9 @@ final class ResultJson {
         node.put("ends", s.ends().name().toLowerCase(java.util.Locale.ROOT));
         s.material().ifPresent(m -> node.put("material", m.name().toLowerCase(java.util.Locale.ROOT).replace('_', '-')));
         node.put("linearDensityKgPerM", s.linearDensityKgPerM());
-        node.put("linearDensityStdKgPerM", s.linearDensityStdKgPerM());
+        putUncertainty(node, "linearDensityStdKgPerM", s.linearDensityStdKgPerM());
         node.put("bendingStiffnessNm2", s.bendingStiffnessNm2());
-        node.put("bendingStiffnessStdNm2", s.bendingStiffnessStdNm2());
+        putUncertainty(node, "bendingStiffnessStdNm2", s.bendingStiffnessStdNm2());
         node.put("forcingPositionM", s.forcingPositionM());
         node.put("sensorPositionM", s.sensorPositionM());
         node.put("nominalTensionN", s.nominalTensionN());
@@ -239,10 +239,22 @@ final class ResultJson {
         return node;
     }
 
+    /** An uncertainty as a specimen file writes it: a number, or "not evaluated" for NaN. */
+    private static void putUncertainty(ObjectNode node, String field, double std) {
+        if (Double.isNaN(std)) {
+            node.put(field, "not evaluated");
+        } else {
+            node.put(field, std);
+        }
+    }
+
     /** A specification in the format that {@code SpecificationFile} reads. */
     static ObjectNode specificationFile(org.tautline.analysis.verdict.Specification spec) {
         ObjectNode node = MAPPER.createObjectNode();
         node.put("name", spec.name());
+        if (!spec.revision().isEmpty()) {
+            node.put("revision", spec.revision());
+        }
         ArrayNode limits = node.putArray("limits");
         for (org.tautline.analysis.verdict.Limit limit : spec.limits()) {
             ObjectNode l = limits.addObject();

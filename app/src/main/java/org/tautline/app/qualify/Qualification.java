@@ -24,6 +24,7 @@ import org.tautline.analysis.specimen.PatternFit;
 import org.tautline.analysis.specimen.Specimen;
 import org.tautline.analysis.specimen.TensionEstimate;
 import org.tautline.analysis.specimen.TensionEstimator;
+import org.tautline.analysis.verdict.Figure;
 import org.tautline.analysis.verdict.Measurement;
 import org.tautline.analysis.verdict.Specification;
 import org.tautline.analysis.verdict.Verdict;
@@ -41,8 +42,6 @@ import org.tautline.driver.sweep.SweepResult;
  * {@code fitNormalisedResidual} and, when the FRF carries its variance, {@code resonanceFrfRelativeStdError}.
  */
 public final class Qualification {
-    /** The figure of the level check. */
-    static final String LEVEL_SHIFT = "linearityShift1";
     /** Why an analysis of an FRF file alone has no level-check figure. */
     static final String LEVEL_CHECK_NEEDS_THE_RIG = "the level check needs the rig (it sweeps the fundamental at two"
             + " drive levels), so an FRF file alone cannot give it; the run's result.json holds it when the rig ran it";
@@ -155,8 +154,8 @@ public final class Qualification {
     public static QualificationResult withLinearity(QualificationResult result, LinearityResult linearity,
                                                     Optional<Specification> specification) {
         Map<String, Measurement> measured = new LinkedHashMap<>(result.measurements());
-        linearity.shifts().stream().filter(s -> s.harmonic() == 1).findFirst().ifPresent(s -> putKnown(measured,
-                LEVEL_SHIFT, s.relativeShift(), s.relativeShiftStd(), ""));
+        linearity.shifts().stream().filter(s -> s.harmonic() == 1).findFirst().ifPresent(s -> put(measured,
+                Figure.LEVEL_SHIFT, s.relativeShift(), s.relativeShiftStd()));
         Optional<Verdict> verdict = judge(specification, measured, result.cautions(), true);
         return new QualificationResult(result.specimen(), result.sweep(), result.receptance(), result.synthesized(),
                 result.modal(), result.modes(), result.harmonics(), result.tension(), result.participation(),
@@ -170,7 +169,7 @@ public final class Qualification {
      */
     private static Optional<Verdict> judge(Optional<Specification> specification, Map<String, Measurement> measured,
                                            List<String> cautions, boolean fromRig) {
-        Map<String, String> whyNotMeasured = fromRig ? Map.of() : Map.of(LEVEL_SHIFT, LEVEL_CHECK_NEEDS_THE_RIG);
+        Map<String, String> whyNotMeasured = fromRig ? Map.of() : Map.of(Figure.LEVEL_SHIFT.key(), LEVEL_CHECK_NEEDS_THE_RIG);
         Optional<Verdict> verdict = specification.map(spec -> Verdict.evaluate(spec, measured, whyNotMeasured));
         for (int i = cautions.size() - 1; i >= 0; i--) {
             String why = "not determinable: " + cautions.get(i);
@@ -218,37 +217,38 @@ public final class Qualification {
                                                          Optional<PatternFit> participation, ModalEstimate modal,
                                                          Frf receptance) {
         Map<String, Measurement> m = new LinkedHashMap<>();
-        dominant(modes, 1).ifPresent(f1 -> putKnown(m, "f1Hz", f1.mode().frequencyHz(), f1.fitted().frequencyStdHz(), "Hz"));
+        dominant(modes, 1).ifPresent(f1 -> put(m, Figure.F1, f1.mode().frequencyHz(), f1.fitted().frequencyStdHz()));
         tension.ifPresent(t -> {
-            m.put("tensionN", new Measurement(t.tensionN(), t.tensionStdN(), "N"));
-            m.put("bendingStiffnessNm2", new Measurement(t.bendingStiffnessNm2(), t.bendingStiffnessStdNm2(), "N m^2"));
+            put(m, Figure.TENSION, t.tensionN(), t.tensionStdN());
+            put(m, Figure.BENDING_STIFFNESS, t.bendingStiffnessNm2(), t.bendingStiffnessStdNm2());
             double relB = Math.hypot(t.bendingStiffnessNm2() > 0 ? t.bendingStiffnessStdNm2() / t.bendingStiffnessNm2() : 0,
                     t.tensionStdN() / t.tensionN());
-            m.put("inharmonicityB", new Measurement(t.inharmonicityB(), Math.abs(t.inharmonicityB()) * relB, ""));
+            put(m, Figure.INHARMONICITY, t.inharmonicityB(), Math.abs(t.inharmonicityB()) * relB);
         });
         int top = modes.stream().mapToInt(QualifiedMode::harmonic).max().orElse(0);
         for (int n = 1; n <= top; n++) {
-            dominant(modes, n).ifPresent(d -> putKnown(m, "dampingRatio" + d.harmonic(), d.mode().dampingRatio(),
-                    d.fitted().dampingRatioStd(), ""));
+            dominant(modes, n).filter(d -> d.harmonic() <= Figure.MAX_DAMPING_HARMONIC).ifPresent(d -> put(m,
+                    Figure.damping(d.harmonic()), d.mode().dampingRatio(), d.fitted().dampingRatioStd()));
         }
         participation.ifPresent(p -> {
-            putKnown(m, "forcingPositionM", p.forcingPositionM(), p.forcingPositionStdM(), "m");
-            putKnown(m, "sensorPositionM", p.sensorPositionM(), p.sensorPositionStdM(), "m");
+            put(m, Figure.FORCING_POSITION, p.forcingPositionM(), p.forcingPositionStdM());
+            put(m, Figure.SENSOR_POSITION, p.sensorPositionM(), p.sensorPositionStdM());
         });
-        modal.quality().ifPresent(q -> m.put("fitNormalisedResidual", new Measurement(q.normalisedResidual(), 0, "")));
+        modal.quality().ifPresent(q -> put(m, Figure.FIT_RESIDUAL, q.normalisedResidual(), 0));
         if (!modes.isEmpty() && receptance.variance().isPresent()) {
-            m.put("resonanceFrfRelativeStdError", new Measurement(worstStdErrorNear(receptance, modal.plainModes()), 0, ""));
+            put(m, Figure.RESONANCE_ERROR, worstStdErrorNear(receptance, modal.plainModes()), 0);
         }
         return m;
     }
 
     /**
-     * Records a figure only when its uncertainty is known: a figure without one (a refinement that
-     * failed) is left out, so the verdict calls its limit not determinable rather than trusting it.
+     * Records a figure only when its value and its uncertainty are known: a figure without an uncertainty (a refinement
+     * that failed, a stated uncertainty declared not evaluated) is left out, so the verdict calls its limit not
+     * determinable rather than trusting it.
      */
-    private static void putKnown(Map<String, Measurement> m, String key, double value, double std, String unit) {
+    private static void put(Map<String, Measurement> m, Figure figure, double value, double std) {
         if (Double.isFinite(value) && Double.isFinite(std) && std >= 0) {
-            m.put(key, new Measurement(value, std, unit));
+            m.put(figure.key(), new Measurement(value, std, figure.unit()));
         }
     }
 

@@ -2,6 +2,7 @@ package org.tautline.app.qualify;
 
 import java.io.IOException;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 
@@ -14,8 +15,14 @@ import org.tautline.analysis.specimen.Specimen;
  * Reads a specimen description (our own JSON format, documented in the README).
  *
  * <p>Either {@code "material"} and {@code "diameterM"} (a solid round wire: mu, EI and EA follow
- * from the handbook values) or {@code "linearDensityKgPerM"} (and optionally
- * {@code "bendingStiffnessNm2"}) must be given; explicit values override the material's.
+ * from the handbook values, with the handbook range as their uncertainty) or {@code "linearDensityKgPerM"} (and
+ * optionally {@code "bendingStiffnessNm2"}) must be given; explicit values override the material's.
+ *
+ * <p>A stated value needs its uncertainty: {@code "linearDensityKgPerM"} its {@code "linearDensityStdKgPerM"},
+ * {@code "bendingStiffnessNm2"} its {@code "bendingStiffnessStdNm2"}, each a number (0 or more) or the text
+ * {@code "not evaluated"}. A missing uncertainty is refused, never taken as zero (that would shrink the tension's
+ * uncertainty and could turn an undecided verdict into a pass); one declared not evaluated makes every figure that
+ * depends on it not determinable. Fields the format does not have, and fields written as {@code null}, are refused.
  */
 public final class SpecimenFile {
     private SpecimenFile() {
@@ -40,7 +47,21 @@ public final class SpecimenFile {
         }
     }
 
+    /** The fields of the file. */
+    static final List<String> FIELDS = List.of("id", "lengthM", "ends", "material", "diameterM", "linearDensityKgPerM",
+            "linearDensityStdKgPerM", "bendingStiffnessNm2", "bendingStiffnessStdNm2", "forcingPositionM",
+            "sensorPositionM", "nominalTensionN", "beltSpeedMPerS", "sensorAngleDeg", "axialStiffnessN");
+    /** What a file writes for an uncertainty that was not evaluated. */
+    static final String NOT_EVALUATED = "not evaluated";
+
     private static Specimen parse(JsonFields json) {
+        json.refuseUnknown(FIELDS);
+        for (String field : FIELDS) {
+            if (json.holdsNull(field)) {
+                throw new AnalysisException("field \"" + field + "\" is null; expected a value, or leave the field out"
+                        + " where it is optional");
+            }
+        }
         String id = json.text("id");
         double length = json.number("lengthM");
         EndCondition ends = ends(json);
@@ -64,12 +85,35 @@ public final class SpecimenFile {
             throw new AnalysisException("give \"material\" with \"diameterM\", or \"linearDensityKgPerM\"; neither was found");
         }
         double mu = json.number("linearDensityKgPerM", base.linearDensityKgPerM());
-        double muStd = json.number("linearDensityStdKgPerM", json.has("linearDensityKgPerM") ? 0 : base.linearDensityStdKgPerM());
+        double muStd = uncertainty(json, "linearDensityKgPerM", "linearDensityStdKgPerM", base.linearDensityStdKgPerM());
         double ei = json.number("bendingStiffnessNm2", base.bendingStiffnessNm2());
-        double eiStd = json.number("bendingStiffnessStdNm2", json.has("bendingStiffnessNm2") ? 0 : base.bendingStiffnessStdNm2());
+        double eiStd = uncertainty(json, "bendingStiffnessNm2", "bendingStiffnessStdNm2", base.bendingStiffnessStdNm2());
         double angle = Math.toRadians(json.number("sensorAngleDeg", 0));
         return new Specimen(id, length, mu, muStd, ei, eiStd, ends, xf, xs, tension, json.number("beltSpeedMPerS", 0),
                 angle, json.number("axialStiffnessN", base.axialStiffnessN()), base.material());
+    }
+
+    /**
+     * The uncertainty of a stated value: required when the value is stated, a number or "not evaluated" (NaN); the
+     * material's handbook range when the value comes from the material.
+     */
+    private static double uncertainty(JsonFields json, String valueField, String stdField, double fromMaterial) {
+        if (!json.has(stdField)) {
+            if (json.has(valueField)) {
+                throw new AnalysisException("field \"" + valueField + "\" is stated without its uncertainty; expected"
+                        + " \"" + stdField + "\": a standard uncertainty (0 or more), or \"" + NOT_EVALUATED + "\"");
+            }
+            return fromMaterial;
+        }
+        if (json.rawText(stdField).startsWith("\"")) {
+            String text = json.text(stdField);
+            if (text.equals(NOT_EVALUATED)) {
+                return Double.NaN;
+            }
+            throw new AnalysisException("field \"" + stdField + "\" holds '" + text + "'; expected a standard uncertainty"
+                    + " (a number, 0 or more) or \"" + NOT_EVALUATED + "\"");
+        }
+        return json.number(stdField);
     }
 
     private static EndCondition ends(JsonFields json) {

@@ -41,6 +41,22 @@ class DemoQualificationTest {
     }
 
     @Test
+    void anUncertaintyDeclaredNotEvaluatedMakesTheTensionNotDeterminableNeverPass() {
+        Specimen s = DemoScenario.specimen();
+        Specimen unknownMu = new Specimen(s.id(), s.lengthM(), s.linearDensityKgPerM(), Double.NaN,
+                s.bendingStiffnessNm2(), s.bendingStiffnessStdNm2(), s.ends(), s.forcingPositionM(), s.sensorPositionM(),
+                s.nominalTensionN(), 0.0, 0.0, s.axialStiffnessN(), java.util.Optional.empty());
+        QualificationResult r = Qualification.analyse(unknownMu, outcome.result().receptance(), java.util.Optional.empty(),
+                org.tautline.analysis.modal.ModalEstimator.defaults(), java.util.Optional.of(DemoScenario.specification()),
+                System.nanoTime());
+        assertFalse(r.measurements().containsKey("tensionN"), "a tension without a known uncertainty is not a figure");
+        org.tautline.analysis.verdict.LimitResult tension = r.verdict().orElseThrow().results().stream()
+                .filter(l -> l.limit().figureKey().equals("tensionN")).findFirst().orElseThrow();
+        assertEquals(Outcome.NOT_DETERMINABLE, tension.outcome(), tension.reason());
+        assertEquals(Outcome.NOT_DETERMINABLE, r.verdict().get().outcome());
+    }
+
+    @Test
     void aSubBandNumbersItsModesAsTheHarmonicsTheStatedTensionAllows() {
         // 200 .. 500 Hz holds harmonics 1 and 2 (both polarisations); unchecked, the numbering once called the 225.6 Hz
         // mode harmonic 8 and read a tension of 2 N against the stated 150 N.
