@@ -69,8 +69,18 @@ final class FileController {
         return Optional.ofNullable(current);
     }
 
+    /** A project cannot be replaced while a sweep runs or is paused: it is analysed with the setup it started with. */
+    private boolean setupLocked() {
+        if (parts.setup().isLocked()) {
+            parts.status().message("A sweep is running or paused: cancel it, or let it finish, before opening or starting"
+                    + " another project.");
+            return true;
+        }
+        return false;
+    }
+
     void newProject() {
-        if (!confirmDiscard()) {
+        if (setupLocked() || !confirmDiscard()) {
             return;
         }
         parts.setup().show(SetupForm.demo());
@@ -82,7 +92,7 @@ final class FileController {
     }
 
     void open() {
-        if (!confirmDiscard()) {
+        if (setupLocked() || !confirmDiscard()) {
             return;
         }
         JFileChooser chooser = chooser("Tautline project", "json");
@@ -93,6 +103,9 @@ final class FileController {
 
     /** Reads a project off the event thread and shows it; a bad file leaves the current project as it was. */
     void openFile(Path file) {
+        if (setupLocked()) {
+            return;
+        }
         parts.status().progress(-1, "reading " + file.getFileName());
         new SwingWorker<Project, Void>() {
             @Override

@@ -358,6 +358,7 @@ final class RunController {
     private void updateButtons() {
         boolean paused = session != null && session.state() == SweepSession.State.PAUSED;
         parts.run().buttons(rig != null, running, paused);
+        parts.setup().locked(running || paused);
     }
 
     boolean isRunning() {

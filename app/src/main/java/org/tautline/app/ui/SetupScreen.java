@@ -30,8 +30,10 @@ final class SetupScreen {
     private final Map<String, JComponent> editors = new LinkedHashMap<>();
     private final Map<String, JLabel> messages = new LinkedHashMap<>();
     private final Runnable onEdit;
+    private final JLabel lockNote = new JLabel();
     private SetupForm form;
     private boolean filling;
+    private boolean locked;
 
     /** @param onEdit called on the event thread after every edit */
     SetupScreen(SetupForm form, Runnable onEdit) {
@@ -44,9 +46,41 @@ final class SetupScreen {
         right.add(section(SetupField.Section.PLAN));
         right.add(section(SetupField.Section.SAFETY));
         right.add(limitsSection());
+        lockNote.setName("setupLocked");
+        lockNote.setVisible(false);
+        panel.add(lockNote, "span 2, wrap");
         panel.add(left);
         panel.add(right);
         validate();
+    }
+
+    /**
+     * Locks the setup while a sweep runs or is paused: the sweep analyses the setup as it was at Start, so an edit
+     * then could only mislead.
+     *
+     * @param lock true to make every field read-only, false to allow edits again
+     */
+    void locked(boolean lock) {
+        if (lock == locked) {
+            return;
+        }
+        locked = lock;
+        editors.values().forEach(e -> {
+            if (e instanceof JTextComponent t) {
+                t.setEditable(!lock);
+            } else {
+                e.setEnabled(!lock);
+            }
+        });
+        lockNote.setText("<html><b>The setup is locked:</b> a sweep is running or paused, and it is analysed with the"
+                + " setup as it was at Start. Cancel the sweep, or let it finish, to edit.</html>");
+        lockNote.setVisible(lock);
+        panel.revalidate();
+    }
+
+    /** @return true while the setup is locked for a sweep */
+    boolean isLocked() {
+        return locked;
     }
 
     JComponent component() {
@@ -149,6 +183,9 @@ final class SetupScreen {
         JLabel problem = new JLabel();
         problem.setForeground(errorColour());
         apply.addActionListener(e -> {
+            if (locked) {
+                return;
+            }
             try {
                 double d = Double.parseDouble(diameter.getText().trim());
                 SetupForm f = form;
@@ -206,7 +243,7 @@ final class SetupScreen {
     }
 
     private void edited(String key, String text) {
-        if (filling) {
+        if (filling || locked) {
             return;
         }
         if (form.set(key, text)) {

@@ -70,6 +70,10 @@ class WorkbenchStopTest {
             assertEquals("Rig: connected: excitation off", onEdt(find(frame, JLabel.class, "rigState")::getText));
             AbstractButton resume = find(frame, AbstractButton.class, "resume");
             assertTrue(onEdt(resume::isEnabled), "Resume is offered after STOP");
+            // The kept steps are analysed with the setup as it was at Start: it stays read-only until the sweep ends.
+            javax.swing.text.JTextComponent span = find(frame, javax.swing.text.JTextComponent.class, "lengthM");
+            assertTrue(!onEdt(span::isEditable), "the setup is locked while the sweep is paused");
+            assertTrue(onEdt(find(frame, JLabel.class, "setupLocked")::isVisible));
             SwingUtilities.invokeAndWait(resume::doClick);
             waitFor("the sweep to go on", 10, () -> progress.getString().startsWith("step "));
             SwingUtilities.invokeAndWait(find(frame, AbstractButton.class, "stop")::doClick);
