@@ -23,31 +23,31 @@ import org.tautline.app.qualify.QualificationResult;
  * string, H = sum (2/(mu L)) sin(n pi x_f/L) sin(n pi x_s/L)/(w_n^2 - w^2 + 2 j zeta w_n w) (modal
  * superposition with mass-normalised modes, a standard result). Noise: 0.2 % of |H| per line with a fixed seed.
  */
-final class SyntheticWire {
-    static final double LENGTH_M = 0.60;
-    static final double DENSITY_KG_PER_M = 2.0e-3;
-    static final double TENSION_N = 150.0;
-    static final double BENDING_NM2 = 6.14e-4;
-    static final double FORCING_M = 0.07;
-    static final double SENSOR_M = 0.43;
-    static final double DAMPING = 0.004;
-    static final int MODES_IN_BAND = 4;
+public final class SyntheticWire {
+    public static final double LENGTH_M = 0.60;
+    public static final double DENSITY_KG_PER_M = 2.0e-3;
+    public static final double TENSION_N = 150.0;
+    public static final double BENDING_NM2 = 6.14e-4;
+    public static final double FORCING_M = 0.07;
+    public static final double SENSOR_M = 0.43;
+    public static final double DAMPING = 0.004;
+    public static final int MODES_IN_BAND = 4;
 
     private SyntheticWire() {
     }
 
-    static double frequencyHz(int n) {
+    public static double frequencyHz(int n) {
         double f0 = Math.sqrt(TENSION_N / DENSITY_KG_PER_M) / (2 * LENGTH_M);
         double b = Math.PI * Math.PI * BENDING_NM2 / (TENSION_N * LENGTH_M * LENGTH_M);
         return n * f0 * Math.sqrt(1 + b * n * n);
     }
 
-    static double modalConstant(int n) {
+    public static double modalConstant(int n) {
         return 2 / (DENSITY_KG_PER_M * LENGTH_M) * Math.sin(n * Math.PI * FORCING_M / LENGTH_M)
                 * Math.sin(n * Math.PI * SENSOR_M / LENGTH_M);
     }
 
-    static Frf receptance() {
+    public static Frf receptance() {
         int lines = 900;
         double low = 160;
         double high = 1000;
@@ -70,18 +70,18 @@ final class SyntheticWire {
         return Frf.of(f, re, im, FrfQuantity.RECEPTANCE);
     }
 
-    static Specimen specimen() {
+    public static Specimen specimen() {
         return new Specimen("SYNTH-1 (invented)", LENGTH_M, DENSITY_KG_PER_M, 0.01 * DENSITY_KG_PER_M, BENDING_NM2,
                 0.1 * BENDING_NM2, EndCondition.PINNED, FORCING_M, SENSOR_M, TENSION_N, 0.0, 0.0, 39000.0, Optional.empty());
     }
 
-    static Specification specification() {
+    public static Specification specification() {
         return new Specification("invented test limits", List.of(
                 Limit.between("tension", "tensionN", "N", 140.0, 160.0),
                 Limit.between("fundamental frequency", "f1Hz", "Hz", 200.0, 260.0)));
     }
 
-    static QualificationResult qualified() {
+    public static QualificationResult qualified() {
         return Qualification.analyse(specimen(), receptance(), Optional.empty(), ModalEstimator.defaults(),
                 Optional.of(specification()), System.nanoTime());
     }
