@@ -6,6 +6,8 @@ import java.util.Optional;
 import org.tautline.analysis.modal.FittedMode;
 import org.tautline.analysis.modal.ModalEstimate;
 import org.tautline.analysis.modal.ModalEstimator;
+import org.tautline.analysis.qualify.QualifiedMode;
+import org.tautline.analysis.qualify.Qualifier;
 import org.tautline.analysis.specimen.LevelledMode;
 import org.tautline.analysis.specimen.LinearityCheck;
 import org.tautline.analysis.specimen.LinearityResult;
@@ -72,7 +74,7 @@ public final class LevelCheck {
      */
     public static Optional<LinearityResult> run(Rig rig, QualificationResult result, SweepPlan main,
                                                 SweepEventListener listener, SweepControl control) {
-        Optional<QualifiedMode> f1 = Qualification.dominant(result.modes(), 1);
+        Optional<QualifiedMode> f1 = Qualifier.dominant(result.modes(), 1);
         if (f1.isEmpty() || result.tension().isEmpty()) {
             return Optional.empty();
         }

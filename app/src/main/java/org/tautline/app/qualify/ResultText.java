@@ -5,6 +5,7 @@ import java.util.Optional;
 
 import org.tautline.analysis.modal.FittedMode;
 import org.tautline.analysis.modal.Mode;
+import org.tautline.analysis.qualify.QualifiedMode;
 import org.tautline.analysis.specimen.AbsentHarmonic;
 import org.tautline.analysis.specimen.PatternFit;
 import org.tautline.analysis.specimen.Specimen;

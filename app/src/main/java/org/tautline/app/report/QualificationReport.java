@@ -13,6 +13,7 @@ import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDDocumentInformation;
 import org.tautline.analysis.modal.FittedMode;
 import org.tautline.analysis.modal.Mode;
+import org.tautline.analysis.qualify.QualifiedMode;
 import org.tautline.analysis.specimen.AbsentHarmonic;
 import org.tautline.analysis.specimen.Specimen;
 import org.tautline.analysis.specimen.TensionEstimate;
@@ -23,7 +24,6 @@ import org.tautline.analysis.verdict.Verdict;
 import org.tautline.app.SafetyNotice;
 import org.tautline.app.lot.FigureStatistics;
 import org.tautline.app.qualify.QualificationResult;
-import org.tautline.app.qualify.QualifiedMode;
 
 /**
  * The qualification report as a PDF: specimen, rig and plan, FRF with the fit, modes, participation,

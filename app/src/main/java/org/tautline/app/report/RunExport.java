@@ -14,10 +14,10 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.tautline.analysis.frf.Frf;
 import org.tautline.analysis.modal.FittedMode;
+import org.tautline.analysis.qualify.QualifiedMode;
 import org.tautline.analysis.verdict.LimitResult;
 import org.tautline.analysis.verdict.Measurement;
 import org.tautline.app.qualify.QualificationResult;
-import org.tautline.app.qualify.QualifiedMode;
 
 /**
  * Exports a qualification as CSV and JSON with the unit in every column name or key:

@@ -10,6 +10,8 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.tautline.analysis.modal.ModalSynthesis;
 import org.tautline.analysis.modal.Mode;
+import org.tautline.analysis.qualify.QualifiedMode;
+import org.tautline.analysis.qualify.Qualifier;
 import org.tautline.analysis.specimen.EndCondition;
 import org.tautline.analysis.specimen.HarmonicShift;
 import org.tautline.analysis.specimen.PatternFit;
@@ -63,7 +65,7 @@ class DemoQualificationTest {
         QualificationResult r = Qualification.analyse(DemoScenario.specimen(), outcome.result().receptance(),
                 java.util.Optional.empty(), org.tautline.analysis.modal.ModalEstimator.defaults().withBand(200, 500),
                 java.util.Optional.of(DemoScenario.specification()), System.nanoTime());
-        assertEquals(1, Qualification.dominant(r.modes(), 1).orElseThrow().harmonic());
+        assertEquals(1, Qualifier.dominant(r.modes(), 1).orElseThrow().harmonic());
         assertEquals(DemoScenario.TRUE_TENSION_N, r.tension().orElseThrow().tensionN(), 0.02 * DemoScenario.TRUE_TENSION_N,
                 "Mersenne's law from harmonics 1 and 2 (Fletcher 1964 line fit)");
         assertTrue(r.cautions().isEmpty(), r.cautions().toString());
@@ -87,7 +89,7 @@ class DemoQualificationTest {
     @Test
     void findsTheFirstSixHarmonicsWithinOneTenthOfAPercent() {
         for (int n = 1; n <= 6; n++) {
-            QualifiedMode found = Qualification.dominant(outcome.result().modes(), n).orElseThrow(
+            QualifiedMode found = Qualifier.dominant(outcome.result().modes(), n).orElseThrow(
                     () -> new AssertionError("a harmonic is missing; modes: " + outcome.result().modes()));
             TrueMode truth = TruthComparison.nearest(outcome.truth(), found.mode()).orElseThrow();
             assertEquals(n, truth.harmonic(), "harmonic " + n + " is matched to the true harmonic " + n);

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.Optional;
 
 import org.junit.jupiter.api.Test;
+import org.tautline.analysis.qualify.Qualifier;
 import org.tautline.analysis.specimen.EndCondition;
 import org.tautline.analysis.specimen.PatternFit;
 import org.tautline.analysis.specimen.Specimen;
@@ -45,7 +46,7 @@ class SimulatedPhysicsTest {
         TensionEstimate t = r.tension().orElseThrow();
         assertTrue(Math.abs(t.tensionN() / tension - 1) < 0.005,
                 "tension from the harmonic series (Fletcher 1964 line fit): " + t.tensionN() + " N vs true " + tension + " N");
-        double f1 = Qualification.dominant(r.modes(), 1).orElseThrow().mode().frequencyHz();
+        double f1 = Qualifier.dominant(r.modes(), 1).orElseThrow().mode().frequencyHz();
         double mersenne = StringPhysics.mersenneTensionN(f1, 1, 0.4, mu);
         assertTrue(Math.abs(mersenne / tension - 1) > 0.005,
                 "Mersenne's law from f1 alone misses by more than 0.5 %: " + mersenne + " N");

@@ -4,8 +4,8 @@ import java.util.ArrayList;
 import java.util.List;
 
 import org.tautline.analysis.modal.FittedMode;
+import org.tautline.analysis.qualify.QualifiedMode;
 import org.tautline.app.qualify.QualificationResult;
-import org.tautline.app.qualify.QualifiedMode;
 
 /** The rows of the mode table: one per fitted mode, in frequency order. Free of Swing. */
 final class ModeRows {

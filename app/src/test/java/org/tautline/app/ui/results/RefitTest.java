@@ -10,8 +10,8 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.tautline.analysis.modal.FittedMode;
 import org.tautline.analysis.modal.Pole;
+import org.tautline.analysis.qualify.QualifiedMode;
 import org.tautline.app.qualify.QualificationResult;
-import org.tautline.app.qualify.QualifiedMode;
 
 /** Refitting with a hand-edited pole choice runs the real fit and everything downstream of it. */
 class RefitTest {

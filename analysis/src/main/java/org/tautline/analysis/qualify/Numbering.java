@@ -1,4 +1,4 @@
-package org.tautline.app.qualify;
+package org.tautline.analysis.qualify;
 
 import java.util.ArrayList;
 import java.util.List;

@@ -1,4 +1,4 @@
-package org.tautline.app.qualify;
+package org.tautline.analysis.qualify;
 
 import org.tautline.analysis.modal.FittedMode;
 import org.tautline.analysis.modal.Mode;
