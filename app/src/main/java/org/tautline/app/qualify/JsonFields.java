@@ -1,20 +1,13 @@
 package org.tautline.app.qualify;
 
 import java.io.IOException;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 
-import com.fasterxml.jackson.core.JsonLocation;
-import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
 import org.tautline.analysis.AnalysisException;
 
 /** Reads a small JSON file and its fields with messages that name the file, the field and what was expected. */
 public final class JsonFields {
-    private static final ObjectMapper MAPPER = new ObjectMapper();
-
     private final String where;
     private final JsonNode node;
 
@@ -24,28 +17,18 @@ public final class JsonFields {
     }
 
     /**
-     * Reads a file that must hold one JSON object.
+     * Reads a file that must hold one JSON object, strictly: UTF-8 (a byte-order mark is allowed), no duplicate field,
+     * nothing after the object.
      *
      * @param file the file
      * @param what what it describes, for messages ("specimen")
      * @return its fields
-     * @throws IOException when the file cannot be read
+     * @throws AnalysisException when the file is absent, a folder, empty, not UTF-8, not valid JSON or not one object,
+     *         naming the file and the line and column (or byte offset)
+     * @throws IOException when the file cannot be read for another reason
      */
     public static JsonFields read(Path file, String what) throws IOException {
-        JsonNode root;
-        try {
-            root = MAPPER.readTree(Files.readString(file));
-        } catch (NoSuchFileException e) {
-            throw new AnalysisException(file + ": no such " + what + " file");
-        } catch (JsonProcessingException e) {
-            JsonLocation at = e.getLocation();
-            throw new AnalysisException(file + (at == null ? "" : ", line " + at.getLineNr() + ", column " + at.getColumnNr())
-                    + ": not valid JSON: " + e.getOriginalMessage());
-        }
-        if (root == null || !root.isObject()) {
-            throw new AnalysisException(file + ": expected a JSON object describing the " + what);
-        }
-        return new JsonFields(file.toString(), root);
+        return new JsonFields(file.toString(), StrictJsonFile.readObject(file, what));
     }
 
     public String where() {
@@ -97,6 +80,10 @@ public final class JsonFields {
         }
         if (!value.isNumber()) {
             throw new AnalysisException(where + ": field \"" + field + "\" holds " + value + "; expected a number");
+        }
+        if (!Double.isFinite(value.asDouble())) {
+            throw new AnalysisException(where + ": field \"" + field + "\" holds a number beyond the range of a double"
+                    + " (about 1.8e308); expected a finite number");
         }
         return value.asDouble();
     }
@@ -181,9 +168,43 @@ public final class JsonFields {
             if (!value.get(i).isNumber()) {
                 throw new AnalysisException(where + ", " + field + "[" + i + "] holds " + value.get(i) + "; expected a number");
             }
+            if (!Double.isFinite(value.get(i).asDouble())) {
+                throw new AnalysisException(where + ", " + field + "[" + i + "] holds a number beyond the range of a double"
+                        + " (about 1.8e308); expected a finite number");
+            }
             out.add(value.get(i).asDouble());
         }
         return out;
+    }
+
+    /**
+     * A field holding {@code true} or {@code false}.
+     *
+     * @param field the field
+     * @return its value
+     */
+    public boolean bool(String field) {
+        JsonNode value = node.get(field);
+        if (value == null || value.isNull()) {
+            throw new AnalysisException(where + ": field \"" + field + "\" is missing; expected true or false");
+        }
+        if (!value.isBoolean()) {
+            throw new AnalysisException(where + ": field \"" + field + "\" holds " + value + "; expected true or false");
+        }
+        return value.asBoolean();
+    }
+
+    /**
+     * A whole-number field that must be present.
+     *
+     * @param field the field
+     * @return the number
+     */
+    public int wholeNumber(String field) {
+        if (!has(field)) {
+            throw new AnalysisException(where + ": field \"" + field + "\" is missing; expected a whole number");
+        }
+        return wholeNumber(field, 0);
     }
 
     /**
