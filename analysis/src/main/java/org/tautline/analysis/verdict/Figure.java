@@ -106,6 +106,17 @@ public record Figure(String key, String unit, String label, String uncertainty) 
                 + String.join(", ", knownKeys())));
     }
 
+    /**
+     * What a figure is called for people, from its key: the label of a known figure; a key no figure has (one kept
+     * in a register written by another version) is shown as it stands, quoted, so it is not taken for a label.
+     *
+     * @param key a figure key
+     * @return its label, for example "tension" for {@code tensionN}
+     */
+    public static String labelFor(String key) {
+        return byKey(key).map(Figure::label).orElse("'" + key + "'");
+    }
+
     /** @return every key, the damping ratios written once as {@code dampingRatio1 .. dampingRatio60} */
     public static List<String> knownKeys() {
         List<String> keys = new ArrayList<>();
@@ -133,7 +144,15 @@ public record Figure(String key, String unit, String label, String uncertainty) 
 
     /** @return the unit for people: the typographic form ({@code N m²}), or "no unit" */
     public String unitLabel() {
-        return unit.isEmpty() ? "no unit" : unit.replace("^2", "²").replace("^3", "³");
+        return unitLabel(unit);
+    }
+
+    /**
+     * @param unit a unit in the ASCII form figures use ({@code "N m^2"}), empty for none
+     * @return the unit for people: the typographic form ({@code N m²}), or "no unit"
+     */
+    public static String unitLabel(String unit) {
+        return unit.isBlank() ? "no unit" : unit.replace("^2", "²").replace("^3", "³");
     }
 
     /** A key that differs from a known one only in letter case, or by one or two letters. */

@@ -4,13 +4,14 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.util.List;
 
+import org.tautline.analysis.verdict.Figure;
 import org.tautline.app.lot.FigureStatistics;
 
 /** The lot section of the report: the statistics table and individuals charts of the main figures. */
 final class LotPages {
     private static final float[] COLUMNS = {0, 140, 170, 225, 280, 335, 390, 445};
     /** The figures charted, when the lot has them. */
-    private static final List<String> CHARTED = List.of("tensionN", "f1Hz");
+    private static final List<String> CHARTED = List.of(Figure.TENSION.key(), Figure.F1.key());
 
     private LotPages() {
     }
@@ -23,9 +24,9 @@ final class LotPages {
                 + " specification's limits (Montgomery, Introduction to Statistical Quality Control).", 8);
         w.row(new String[] {"figure", "n", "mean", "std", "min", "max", "Cpk", "unit"}, COLUMNS, true);
         for (FigureStatistics s : lot) {
-            w.row(new String[] {s.key(), Integer.toString(s.n()), Figures.format(s.mean()), Figures.format(s.std()),
+            w.row(new String[] {Figure.labelFor(s.key()), Integer.toString(s.n()), Figures.format(s.mean()), Figures.format(s.std()),
                     Figures.format(s.min()), Figures.format(s.max()), Figures.format(s.cpk()),
-                    s.unit().isEmpty() ? "1" : s.unit()}, COLUMNS, false);
+                    Figure.unitLabel(s.unit())}, COLUMNS, false);
         }
         for (FigureStatistics s : lot) {
             if (CHARTED.contains(s.key()) && s.n() > 1) {

@@ -7,6 +7,7 @@ import java.util.Optional;
 import org.tautline.analysis.frf.Frf;
 import org.tautline.analysis.specimen.ParticipationEntry;
 import org.tautline.analysis.specimen.PatternFit;
+import org.tautline.analysis.verdict.Figure;
 import org.tautline.app.lot.IndividualsChart;
 import org.tautline.app.qualify.QualificationResult;
 
@@ -65,8 +66,10 @@ final class ReportCharts {
             values[i] = chart.values().get(i);
         }
         double[] ends = {1, Math.max(count, 2)};
-        return new PdfChart("Individuals chart of " + key + ": mean and 3-sigma limits from the moving range",
-                "qualification in the lot", key + (unit.isEmpty() ? "" : " (" + unit + ")"), false, List.of(
+        String label = Figure.labelFor(key);
+        return new PdfChart("Individuals chart of " + label + ": mean and 3-sigma limits from the moving range",
+                "qualification in the lot", label + (unit.isEmpty() ? "" : " (" + Figure.unitLabel(unit) + ")"), false,
+                List.of(
                 new PdfChart.Series("value", index, values, BLUE, true, false),
                 new PdfChart.Series("", index, values, BLUE, false, false),
                 new PdfChart.Series("mean", ends, new double[] {chart.centre(), chart.centre()}, GREEN, false, false),

@@ -13,6 +13,7 @@ import org.jfree.chart.ui.RectangleAnchor;
 import org.jfree.chart.ui.TextAnchor;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
+import org.tautline.analysis.verdict.Figure;
 import org.tautline.app.lot.FigureStatistics;
 
 /**
@@ -49,7 +50,7 @@ final class LotChart {
     void show(FigureStatistics f) {
         data.removeAllSeries();
         plot.clearRangeMarkers();
-        XYSeries values = new XYSeries(f.key() + (f.unit().isBlank() ? "" : " (" + f.unit() + ")"), false);
+        XYSeries values = new XYSeries(axisLabel(f), false);
         XYSeries outside = new XYSeries("outside the control limits", false);
         for (int i = 0; i < f.chart().values().size(); i++) {
             values.add(i + 1, f.chart().values().get(i));
@@ -59,16 +60,21 @@ final class LotChart {
         }
         data.addSeries(values);
         data.addSeries(outside);
-        plot.getRangeAxis().setLabel(f.key() + (f.unit().isBlank() ? "" : " (" + f.unit() + ")"));
+        plot.getRangeAxis().setLabel(axisLabel(f));
         marker(f.chart().centre(), "centre", Palette.SECOND, false);
         marker(f.chart().lowerControlLimit(), "LCL", Palette.SECOND, true);
         marker(f.chart().upperControlLimit(), "UCL", Palette.SECOND, true);
         marker(f.lowerLimit(), "lower spec", Palette.FIT, false);
         marker(f.upperLimit(), "upper spec", Palette.FIT, false);
-        chart.setTitle("Control chart of " + f.key() + " (individuals, " + f.n() + " qualifications)");
+        chart.setTitle("Control chart of " + Figure.labelFor(f.key()) + " (individuals, " + f.n() + " qualifications)");
         double[] range = valueRange(f);
         plot.getRangeAxis().setRange(range[0], range[1]);
         plot.getDomainAxis().setRange(0.5, Math.max(f.n(), 2) + 0.5);
+    }
+
+    /** The figure's label with its unit, typographic, for the axis and the legend. */
+    private static String axisLabel(FigureStatistics f) {
+        return Figure.labelFor(f.key()) + (f.unit().isBlank() ? "" : " (" + Figure.unitLabel(f.unit()) + ")");
     }
 
     /**

@@ -126,10 +126,10 @@ class WorkbenchTest {
             AbstractButton addToLot = find(frame, AbstractButton.class, "addToLot");
             SwingUtilities.invokeAndWait(addToLot::doClick);
             JLabel lotMessage = find(frame, JLabel.class, "lotMessage");
-            waitFor("the lot's statistics", 30, () -> lotMessage.getText().startsWith("tensionN:"));
+            waitFor("the lot's statistics", 30, () -> lotMessage.getText().startsWith("tension:"));
             javax.swing.JTable lotFigures = find(frame, javax.swing.JTable.class, "lotFigures");
             assertTrue(onEdt(lotFigures::getRowCount) >= 5, "one row per figure of the qualification");
-            assertEquals("tensionN", onEdt(() -> lotFigures.getValueAt(lotFigures.getSelectedRow(), 0)));
+            assertEquals("tension", onEdt(() -> lotFigures.getValueAt(lotFigures.getSelectedRow(), 0)));
             assertEquals("1", onEdt(() -> lotFigures.getValueAt(lotFigures.getSelectedRow(), 2)));
             SwingUtilities.invokeAndWait(addToLot::doClick);
             waitFor("the second qualification", 30, () -> "2".equals(lotFigures.getValueAt(0, 2)));

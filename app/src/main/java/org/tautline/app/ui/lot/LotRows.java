@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
+import org.tautline.analysis.verdict.Figure;
 import org.tautline.app.lot.FigureStatistics;
 
 /** The rows of the lot statistics table, as text: the presenter of the lot screen, free of Swing. */
@@ -22,7 +23,7 @@ public final class LotRows {
     public static List<String[]> of(List<FigureStatistics> figures) {
         List<String[]> rows = new ArrayList<>();
         for (FigureStatistics f : figures) {
-            rows.add(new String[] {f.key(), f.unit(), Integer.toString(f.n()), number(f.mean()), number(f.std()),
+            rows.add(new String[] {Figure.labelFor(f.key()), Figure.unitLabel(f.unit()), Integer.toString(f.n()), number(f.mean()), number(f.std()),
                     number(f.min()), number(f.max()), number(f.lowerLimit()), number(f.upperLimit()), cpk(f.cpk())});
         }
         return rows;
@@ -34,10 +35,10 @@ public final class LotRows {
      */
     public static String chartSummary(FigureStatistics f) {
         if (f.n() < 2) {
-            return f.key() + ": one qualification so far; control limits need two or more";
+            return Figure.labelFor(f.key()) + ": one qualification so far; control limits need two or more";
         }
         List<Integer> out = f.chart().outOfControl();
-        return String.format(Locale.ROOT, "%s: centre %s, control limits %s .. %s (mean +/- 3 MR-bar/1.128); %s", f.key(),
+        return String.format(Locale.ROOT, "%s: centre %s, control limits %s .. %s (mean +/- 3 MR-bar/1.128); %s", Figure.labelFor(f.key()),
                 number(f.chart().centre()), number(f.chart().lowerControlLimit()), number(f.chart().upperControlLimit()),
                 out.isEmpty() ? "all " + f.n() + " points inside" : out.size() + " point(s) outside: number "
                         + out.stream().map(i -> Integer.toString(i + 1)).reduce((a, b) -> a + ", " + b).orElse(""));

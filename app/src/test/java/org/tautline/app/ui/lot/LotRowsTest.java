@@ -18,10 +18,22 @@ class LotRowsTest {
         FigureStatistics withLimits = FigureStatistics.of("tensionN", "N", List.of(1.0, 2.0, 3.0), 0.0, 5.0);
         FigureStatistics noLimits = FigureStatistics.of("f1Hz", "Hz", List.of(10.0), Double.NaN, Double.NaN);
         List<String[]> rows = LotRows.of(List.of(withLimits, noLimits));
-        assertArrayEquals(new String[] {"tensionN", "N", "3", "2.00000", "1.00000", "1.00000", "3.00000", "0.00000",
+        assertArrayEquals(new String[] {"tension", "N", "3", "2.00000", "1.00000", "1.00000", "3.00000", "0.00000",
                 "5.00000", "0.67"}, rows.get(0));
-        assertArrayEquals(new String[] {"f1Hz", "Hz", "1", "10.0000", "-", "10.0000", "10.0000", "-", "-", "-"},
+        assertArrayEquals(new String[] {"fundamental frequency", "Hz", "1", "10.0000", "-", "10.0000", "10.0000", "-", "-", "-"},
                 rows.get(1));
+    }
+
+    @Test
+    void figuresAreNamedForPeopleWithTypographicUnits() {
+        FigureStatistics stiffness = FigureStatistics.of("bendingStiffnessNm2", "N m^2", List.of(6e-4), Double.NaN,
+                Double.NaN);
+        FigureStatistics damping = FigureStatistics.of("dampingRatio1", "", List.of(3e-3), Double.NaN, Double.NaN);
+        List<String[]> rows = LotRows.of(List.of(stiffness, damping));
+        assertEquals("bending stiffness EI", rows.get(0)[0]);
+        assertEquals("N m²", rows.get(0)[1]);
+        assertEquals("damping ratio of harmonic 1", rows.get(1)[0]);
+        assertEquals("no unit", rows.get(1)[1]);
     }
 
     @Test
@@ -30,9 +42,9 @@ class LotRowsTest {
         // the moving ranges are 0, 0, 0, 4, MR-bar = 1, mean 10.8, limits 10.8 +/- 2.6596 = 8.1404 .. 13.4596.
         FigureStatistics f = FigureStatistics.of("f1Hz", "Hz", List.of(10.0, 10.0, 10.0, 10.0, 14.0), Double.NaN,
                 Double.NaN);
-        assertEquals("f1Hz: centre 10.8000, control limits 8.14043 .. 13.4596 (mean +/- 3 MR-bar/1.128); 1 point(s)"
+        assertEquals("fundamental frequency: centre 10.8000, control limits 8.14043 .. 13.4596 (mean +/- 3 MR-bar/1.128); 1 point(s)"
                 + " outside: number 5", LotRows.chartSummary(f));
-        assertEquals("f1Hz: one qualification so far; control limits need two or more",
+        assertEquals("fundamental frequency: one qualification so far; control limits need two or more",
                 LotRows.chartSummary(FigureStatistics.of("f1Hz", "Hz", List.of(10.0), Double.NaN, Double.NaN)));
     }
 }
