@@ -11,6 +11,7 @@ import org.tautline.analysis.modal.Mode;
 import org.tautline.analysis.qualify.QualifiedMode;
 import org.tautline.analysis.specimen.AbsentHarmonic;
 import org.tautline.analysis.specimen.Specimen;
+import org.tautline.analysis.verdict.Figure;
 import org.tautline.analysis.verdict.LimitResult;
 import org.tautline.analysis.verdict.Verdict;
 import org.tautline.app.qualify.DemoOutcome;
@@ -205,6 +206,7 @@ final class ResultJson {
             ObjectNode limit = limits.addObject();
             limit.put("name", result.limit().name());
             limit.put("figure", result.limit().figureKey());
+            limit.put("figureLabel", Figure.labelFor(result.limit().figureKey()));
             limit.put("unit", result.limit().unit());
             putFinite(limit, "lower", result.limit().lowerBound());
             putFinite(limit, "upper", result.limit().upperBound());
