@@ -115,7 +115,7 @@ final class LotScreen {
         String name = lot.getText().strip();
         QualificationResult result = shown.orElseThrow();
         run("adding " + result.specimen().id() + " to lot " + name, () -> {
-            try (LotRegister r = LotRegister.open(location)) {
+            try (LotRegister r = LotRegister.openForAppending(location)) {
                 r.append(LotEntries.of(name, result, "workbench", Instant.now()));
             }
             return read(location, name);
@@ -126,7 +126,7 @@ final class LotScreen {
         if (name.isEmpty()) {
             throw new IllegalArgumentException("the lot name is empty; expected the name the qualifications were added under");
         }
-        try (LotRegister r = LotRegister.open(location)) {
+        try (LotRegister r = LotRegister.openForQueries(location)) {
             return LotStatistics.of(r.entries(name));
         }
     }
