@@ -27,6 +27,15 @@ public enum FrfQuantity {
         return siUnits;
     }
 
+    /** @return what the quantity is called for people: "receptance", "mobility" or "accelerance" */
+    public String label() {
+        return switch (this) {
+            case RECEPTANCE -> "receptance";
+            case MOBILITY -> "mobility";
+            case ACCELERANCE -> "accelerance";
+        };
+    }
+
     /** @return how many time derivatives of displacement the response is: 0, 1 or 2 */
     public int derivativeOrder() {
         return derivativeOrder;

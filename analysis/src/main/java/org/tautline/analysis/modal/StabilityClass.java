@@ -10,13 +10,19 @@ package org.tautline.analysis.modal;
  */
 public enum StabilityClass {
     /** No pole of the previous order lies within 1 % in frequency (and every pole of the first order). */
-    NEW,
+    NEW("new"),
     /** The nearest pole of the previous order lies within 1 % in frequency. */
-    FREQUENCY,
+    FREQUENCY("stable in frequency"),
     /** As FREQUENCY, and the damping ratios agree within 5 % of the previous one. */
-    DAMPING,
+    DAMPING("stable in frequency and damping"),
     /** As DAMPING, and the modal constants agree within 5 % (only with a residue estimator). */
-    STABLE;
+    STABLE("stable");
+
+    private final String label;
+
+    StabilityClass(String label) {
+        this.label = label;
+    }
 
     /**
      * Whether this class meets at least another one.
@@ -26,5 +32,10 @@ public enum StabilityClass {
      */
     public boolean atLeast(StabilityClass other) {
         return compareTo(other) >= 0;
+    }
+
+    /** @return the class in words for people, for legends */
+    public String label() {
+        return label;
     }
 }
