@@ -15,7 +15,6 @@ import java.util.Optional;
 import java.util.concurrent.TimeUnit;
 
 import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.Timeout;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -49,7 +48,6 @@ class StopSignalTest {
 
     @ParameterizedTest(name = "SIG{0}")
     @CsvSource({"INT, 130", "TERM, 143"})
-    @Timeout(value = 120, unit = TimeUnit.SECONDS)
     void aStopSignalSwitchesTheOutputOffJournalsTheStopAndSaysHowToResume(String signal, int exitCode,
                                                                            @TempDir Path dir) throws Exception {
         Path run = dir.resolve("run");

@@ -16,7 +16,6 @@ import java.util.concurrent.TimeUnit;
 
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.Timeout;
 import org.junit.jupiter.api.io.TempDir;
 import org.tautline.driver.spi.RigDrivers;
 import org.tautline.driver.sweep.SweepControl;
@@ -36,7 +35,6 @@ class KillResumeTest {
     }
 
     @Test
-    @Timeout(value = 120, unit = TimeUnit.SECONDS)
     void aKilledSweepResumesToTheUninterruptedResult(@TempDir Path dir) throws Exception {
         Path file = JournalFixtures.journal(dir);
         String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
