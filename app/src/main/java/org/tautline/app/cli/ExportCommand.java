@@ -8,13 +8,18 @@ import org.tautline.app.report.RunDirectory;
 import org.tautline.app.report.RunExport;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
 
 /** {@code tautline export}: FRF, modes, properties and verdict of a run directory as CSV and JSON. */
 @Command(name = "export", mixinStandardHelpOptions = true,
         description = "Write the FRF with the fit, the modes, the properties and the verdict of a run directory as CSV"
                 + " and JSON, with units in the column names and keys.")
 final class ExportCommand implements Callable<Integer> {
+    @Spec
+    private CommandSpec spec;
+
     @Parameters(index = "0", paramLabel = "RUNDIR", description = "The run directory, as demo --out writes it.")
     private Path runDir;
 
@@ -24,7 +29,7 @@ final class ExportCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         RunExport.write(RunDirectory.read(runDir).result(), outDir);
-        System.err.println("tautline: wrote " + String.join(", ", RunExport.FILES) + " to " + outDir);
+        spec.commandLine().getErr().println("tautline: wrote " + String.join(", ", RunExport.FILES) + " to " + outDir);
         return 0;
     }
 }

@@ -2,6 +2,7 @@ package org.tautline.app.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.util.List;
@@ -10,6 +11,7 @@ import java.util.concurrent.Callable;
 
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import org.tautline.analysis.AnalysisException;
 import org.tautline.app.lot.FigureStatistics;
 import org.tautline.app.lot.LotEntries;
 import org.tautline.app.lot.LotEntry;
@@ -42,7 +44,8 @@ final class LotCommand implements Callable<Integer> {
                     + " in the current folder, or beside RUNDIR with --add).")
     private String register;
 
-    @Option(names = "--add", paramLabel = "RUNDIR", description = "Qualify this run directory again and append it to the lot.")
+    @Option(names = "--add", paramLabel = "RUNDIR", description = "Qualify this run directory again and append it to"
+            + " the lot; a run folder already in the lot (the same folder, or the same frf.csv) is refused.")
     private Path add;
 
     @Option(names = "--json", description = "Print the statistics as JSON.")
@@ -57,19 +60,31 @@ final class LotCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         String location = register != null ? register : add != null ? besideRuns(add) : LotRegister.DEFAULT_FILE_NAME;
-        if (add == null && !location.startsWith("jdbc:") && !java.nio.file.Files.exists(Path.of(location))) {
-            throw new org.tautline.analysis.AnalysisException("register file " + Path.of(location).toAbsolutePath()
-                    + " does not exist; expected --register FILE|URL naming a lot register, or --add RUNDIR to start one");
-        }
         List<LotEntry> entries;
         int status = ExitCodes.OK;
-        try (LotRegister r = LotRegister.open(location)) {
-            if (add != null) {
-                RunDirectory run = RunDirectory.read(add);
-                r.append(LotEntries.of(lot, run.result(), add.toAbsolutePath().toString(), Instant.now()));
-                status = ExitCodes.of(run.result().verdict());
+        if (add == null) {
+            if (!location.startsWith("jdbc:") && !Files.exists(Path.of(location))) {
+                throw new AnalysisException("register file " + Path.of(location).toAbsolutePath() + " does not exist;"
+                        + " expected --register FILE|URL naming a lot register, or --add RUNDIR to start one");
             }
-            entries = r.entries(lot);
+            try (LotRegister r = LotRegister.openForQueries(location)) {
+                entries = r.entries(lot);
+            }
+        } else {
+            RunDirectory.Inputs inputs = RunDirectory.readInputs(add);
+            Path folder = add.toAbsolutePath().normalize();
+            if (location.startsWith("jdbc:") || Files.exists(Path.of(location))) {
+                // Refused before the (slow) qualification; the append checks again in its transaction.
+                try (LotRegister r = LotRegister.openForAppending(location)) {
+                    r.refuseRepeatedRun(lot, folder.toString(), inputs.frfSha256());
+                }
+            }
+            RunDirectory run = RunDirectory.analyse(inputs);
+            try (LotRegister r = LotRegister.openForAppending(location)) {
+                r.append(LotEntries.ofRunFolder(lot, run.result(), folder, run.frfSha256(), Instant.now()));
+                status = ExitCodes.of(run.result().verdict());
+                entries = r.entries(lot);
+            }
         }
         List<FigureStatistics> statistics = LotStatistics.of(entries);
         PrintWriter out = spec.commandLine().getOut();

@@ -14,7 +14,9 @@ import org.tautline.app.report.ReportInfo;
 import org.tautline.app.report.RunDirectory;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
 
 /** {@code tautline report}: the PDF report of a run directory, qualified again from its files. */
 @Command(name = "report", mixinStandardHelpOptions = true,
@@ -23,6 +25,9 @@ import picocli.CommandLine.Parameters;
         exitCodeListHeading = "%nExit status (the report is written in each case but an error):%n",
         exitCodeList = {"0:PASS, or no specification", "1:an error", "10:FAIL", "11:NOT_DETERMINABLE"})
 final class ReportCommand implements Callable<Integer> {
+    @Spec
+    private CommandSpec spec;
+
     @Parameters(index = "0", paramLabel = "RUNDIR", description = "The run directory, as demo --out writes it.")
     private Path runDir;
 
@@ -42,16 +47,17 @@ final class ReportCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
-        RunDirectory run = RunDirectory.read(runDir);
+        RunDirectory.Inputs inputs = RunDirectory.readInputs(runDir);
         List<FigureStatistics> statistics = List.of();
         if (lot != null) {
-            try (LotRegister r = LotRegister.open(register != null ? register : LotCommand.besideRuns(runDir))) {
+            try (LotRegister r = LotRegister.openForQueries(register != null ? register : LotCommand.besideRuns(runDir))) {
                 statistics = LotStatistics.of(r.entries(lot));
             }
         }
+        RunDirectory run = RunDirectory.analyse(inputs);
         QualificationReport.write(run, new ReportInfo(operator, ReportInfo.SOFTWARE, Instant.now()), lot == null ? "" : lot,
                 statistics, pdf);
-        System.err.println("tautline: wrote the report to " + pdf);
+        spec.commandLine().getErr().println("tautline: wrote the report to " + pdf);
         return ExitCodes.of(run.result().verdict());
     }
 }

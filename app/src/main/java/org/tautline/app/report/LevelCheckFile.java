@@ -2,74 +2,88 @@ package org.tautline.app.report;
 
 import java.io.IOException;
 import java.nio.file.Files;
+import java.nio.file.LinkOption;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 
-import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import org.tautline.analysis.AnalysisException;
 import org.tautline.analysis.specimen.HarmonicShift;
 import org.tautline.analysis.specimen.LinearityResult;
+import org.tautline.app.qualify.JsonFields;
 
 /**
  * The level check of a run, read back from the {@code linearity} block of its {@code result.json}: the check
  * needs the rig, so a report cannot repeat it and takes the recorded shifts instead.
+ *
+ * <p>The file is optional; when it is there it must be one JSON object, read as strictly as every JSON input
+ * ({@link JsonFields#read}), and every block this class uses must be whole: {@code linearity} with {@code linear} and
+ * its {@code shifts}, and the sweep's {@code steps}, {@code rigTimeS} and {@code sweepCompleted} together.
  */
 public final class LevelCheckFile {
+    /** What the file describes, for messages. */
+    static final String WHAT = "recorded run";
+
     private LevelCheckFile() {
     }
 
     /**
      * @param resultJson a run's result.json
-     * @return the recorded level check; empty when the file is absent or holds none
-     * @throws IOException when the file cannot be read
+     * @return the recorded level check; empty when the file is absent or records none
+     * @throws org.tautline.analysis.AnalysisException when the file is there but cannot be read as a recorded run,
+     *         naming the file, the place and what was expected
+     * @throws IOException when the file cannot be read for another reason
      */
     public static Optional<LinearityResult> read(Path resultJson) throws IOException {
-        if (!Files.isRegularFile(resultJson)) {
+        Optional<JsonFields> root = open(resultJson);
+        return root.isPresent() ? levelCheck(resultJson, root.get()) : Optional.empty();
+    }
+
+    /**
+     * @param resultJson a run's result.json
+     * @return the recorded sweep in words: steps, rig time, wall time, whether it completed; empty when the file is
+     *         absent or records no sweep
+     * @throws IOException when the file cannot be read
+     */
+    static Optional<String> sweepLine(Path resultJson) throws IOException {
+        Optional<JsonFields> root = open(resultJson);
+        return root.isPresent() ? sweepLine(resultJson, root.get()) : Optional.empty();
+    }
+
+    /** @return the file's fields; empty when there is no file (a link to nothing or a folder is refused) */
+    static Optional<JsonFields> open(Path resultJson) throws IOException {
+        if (!Files.exists(resultJson, LinkOption.NOFOLLOW_LINKS)) {
             return Optional.empty();
         }
-        JsonNode root = new ObjectMapper().readTree(resultJson.toFile());
-        JsonNode block = root == null ? null : root.get("linearity");
-        if (block == null) {
+        return Optional.of(JsonFields.read(resultJson, WHAT));
+    }
+
+    static Optional<LinearityResult> levelCheck(Path resultJson, JsonFields root) {
+        if (!root.has("linearity")) {
             return Optional.empty();
         }
+        JsonFields block = root.object("linearity");
+        boolean linear = block.bool("linear");
         List<HarmonicShift> shifts = new ArrayList<>();
-        JsonNode list = block.path("shifts");
-        for (int i = 0; i < list.size(); i++) {
-            JsonNode s = list.get(i);
-            shifts.add(new HarmonicShift(s.path("harmonic").asInt(), number(resultJson, s, "firstFrequencyHz", i),
-                    number(resultJson, s, "secondFrequencyHz", i), number(resultJson, s, "relativeShift", i),
-                    s.path("relativeShiftStd").asDouble(Double.NaN), s.path("predictedRelativeShift").asDouble(Double.NaN),
-                    s.path("significant").asBoolean()));
+        for (JsonFields s : block.objects("shifts")) {
+            shifts.add(new HarmonicShift(s.wholeNumber("harmonic"), s.number("firstFrequencyHz"),
+                    s.number("secondFrequencyHz"), s.number("relativeShift"), s.number("relativeShiftStd", Double.NaN),
+                    s.number("predictedRelativeShift", Double.NaN), s.bool("significant")));
         }
-        boolean linear = block.path("linear").asBoolean();
         return Optional.of(new LinearityResult(shifts, linear, List.of("level check at two drive levels (recorded in "
                 + resultJson.getFileName() + "): " + (linear ? "linear" : "not linear"))));
     }
 
-    /** @return the recorded sweep in words: steps, rig time, wall time, whether it completed; empty when not recorded */
-    static Optional<String> sweepLine(Path resultJson) throws IOException {
-        if (!Files.isRegularFile(resultJson)) {
+    static Optional<String> sweepLine(Path resultJson, JsonFields root) {
+        if (!root.has("steps") && !root.has("rigTimeS")) {
             return Optional.empty();
         }
-        JsonNode root = new ObjectMapper().readTree(resultJson.toFile());
-        if (root == null || !root.has("steps") || !root.has("rigTimeS")) {
-            return Optional.empty();
-        }
-        return Optional.of(String.format(java.util.Locale.ROOT, "Sweep as recorded in %s: %d steps, rig time %s s,"
-                        + " wall time %s s, %s.", resultJson.getFileName(), root.path("steps").asInt(),
-                Figures.format(root.path("rigTimeS").asDouble()), Figures.format(root.path("wallTimeS").asDouble(Double.NaN)),
-                root.path("sweepCompleted").asBoolean() ? "completed" : "stopped before the end"));
-    }
-
-    private static double number(Path file, JsonNode node, String field, int index) {
-        JsonNode value = node.get(field);
-        if (value == null || !value.isNumber()) {
-            throw new AnalysisException(file + ": linearity.shifts[" + index + "]." + field + " must be a number, got "
-                    + (value == null ? "nothing" : value.toString()));
-        }
-        return value.asDouble();
+        int steps = root.wholeNumber("steps");
+        double rigTimeS = root.number("rigTimeS");
+        boolean completed = root.bool("sweepCompleted");
+        return Optional.of(String.format(Locale.ROOT, "Sweep as recorded in %s: %d steps, rig time %s s,"
+                        + " wall time %s s, %s.", resultJson.getFileName(), steps, Figures.format(rigTimeS),
+                Figures.format(root.number("wallTimeS", Double.NaN)), completed ? "completed" : "stopped before the end"));
     }
 }

@@ -1,37 +1,48 @@
 package org.tautline.app.report;
 
+import java.io.ByteArrayInputStream;
 import java.io.IOException;
+import java.nio.file.AccessDeniedException;
 import java.nio.file.Files;
+import java.nio.file.LinkOption;
 import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.Collections;
+import java.util.HexFormat;
+import java.util.LinkedHashMap;
+import java.util.Map;
 import java.util.Optional;
 
 import org.tautline.analysis.AnalysisException;
 import org.tautline.analysis.frf.FrfCsvReader;
 import org.tautline.analysis.modal.ModalEstimator;
+import org.tautline.analysis.specimen.LinearityResult;
 import org.tautline.analysis.specimen.Specimen;
 import org.tautline.analysis.verdict.Specification;
+import org.tautline.app.qualify.JsonFields;
 import org.tautline.app.qualify.Qualification;
 import org.tautline.app.qualify.QualificationResult;
 import org.tautline.app.qualify.SpecificationFile;
 import org.tautline.app.qualify.SpecimenFile;
 
 /**
- * A run directory as {@code demo --out} writes it: {@code frf.csv}, {@code specimen.json} and optionally
- * {@code spec.json}. The qualification is re-derived from these files; the fit is deterministic, so it gives
- * the figures of the run. The level check needs the rig, so its shifts are read from {@code result.json}.
+ * A run directory as {@code demo --out} writes it: {@code frf.csv} and {@code specimen.json} (required),
+ * {@code spec.json} (optional: without it no limit is judged) and {@code result.json} (optional: without it there is
+ * no level check and no recorded sweep). A file that is there must be readable: a folder, an empty file, a link to
+ * nothing or content that cannot be read is refused, naming it, before anything is analysed. The qualification is
+ * re-derived from these files; the fit is deterministic, so it gives the figures of the run. The level check needs
+ * the rig, so its shifts are read from {@code result.json}.
  *
  * @param directory the directory
  * @param result the qualification re-derived from its files
  * @param metadata the FRF file's metadata (rig, sensors, calibration, plan), in file order
  * @param recordedSweep the sweep as {@code result.json} recorded it (steps, rig and wall time), in words
+ * @param frfSha256 the SHA-256 of the {@code frf.csv} bytes that were analysed, lower-case hex; empty when the
+ *        result did not come from a run directory
  */
-public record RunDirectory(Path directory, QualificationResult result, java.util.Map<String, String> metadata,
-                           Optional<String> recordedSweep) {
-
-    /** Copies the metadata. */
-    public RunDirectory {
-        metadata = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(metadata));
-    }
+public record RunDirectory(Path directory, QualificationResult result, Map<String, String> metadata,
+                           Optional<String> recordedSweep, String frfSha256) {
     /** The FRF file name. */
     public static final String FRF = "frf.csv";
     /** The specimen file name. */
@@ -41,35 +52,150 @@ public record RunDirectory(Path directory, QualificationResult result, java.util
     /** The recorded result; its level check is taken over, everything else is derived again. */
     public static final String RESULT = "result.json";
 
+    /** Copies the metadata. */
+    public RunDirectory {
+        metadata = Collections.unmodifiableMap(new LinkedHashMap<>(metadata));
+    }
+
+    /**
+     * A qualification that was not read from a run directory's files (the workbench's): no FRF fingerprint.
+     *
+     * @param directory where it is written
+     * @param result the qualification
+     * @param metadata the FRF metadata
+     * @param recordedSweep the sweep in words
+     */
+    public RunDirectory(Path directory, QualificationResult result, Map<String, String> metadata,
+                        Optional<String> recordedSweep) {
+        this(directory, result, metadata, recordedSweep, "");
+    }
+
+    /**
+     * The files of a run directory, read and checked, not yet analysed.
+     *
+     * @param directory the directory
+     * @param specimen the stated specimen
+     * @param specification the limits, empty without {@code spec.json}
+     * @param frf the FRF and its metadata
+     * @param levelCheck the recorded level check, empty without one
+     * @param recordedSweep the recorded sweep in words, empty without one
+     * @param frfSha256 the SHA-256 of the {@code frf.csv} bytes, lower-case hex
+     */
+    public record Inputs(Path directory, Specimen specimen, Optional<Specification> specification,
+                         FrfCsvReader.Contents frf, Optional<LinearityResult> levelCheck, Optional<String> recordedSweep,
+                         String frfSha256) {
+    }
+
     /**
      * Reads a run directory and qualifies it again.
      *
      * @param directory the directory
      * @return the run
      * @throws IOException when a file cannot be read
-     * @throws AnalysisException when a file is missing or wrong, naming it
+     * @throws AnalysisException when a file is missing or cannot be read as what it should hold, naming it
      */
     public static RunDirectory read(Path directory) throws IOException {
-        if (!Files.isDirectory(directory)) {
+        return analyse(readInputs(directory));
+    }
+
+    /**
+     * Reads and checks every file of a run directory, without the (slow) analysis.
+     *
+     * @param directory the directory
+     * @return its inputs
+     * @throws IOException when a file cannot be read
+     * @throws AnalysisException when a file is missing or cannot be read as what it should hold, naming it
+     */
+    public static Inputs readInputs(Path directory) throws IOException {
+        if (!Files.exists(directory)) {
             throw new AnalysisException("run directory " + directory + " does not exist; expected the folder demo --out wrote");
         }
-        for (String name : new String[] {FRF, SPECIMEN}) {
-            if (!Files.isRegularFile(directory.resolve(name))) {
+        if (!Files.isDirectory(directory)) {
+            throw new AnalysisException("run directory " + directory + " is a file, not a folder; expected the folder"
+                    + " demo --out wrote");
+        }
+        present(directory, FRF, true, "the measured FRF (CSV)");
+        present(directory, SPECIMEN, true, "the specimen (JSON)");
+        boolean judged = present(directory, SPECIFICATION, false, "the specification (JSON)");
+        boolean recorded = present(directory, RESULT, false, "the recorded run (JSON)");
+        Specimen specimen = SpecimenFile.read(directory.resolve(SPECIMEN));
+        Optional<Specification> specification = judged ? Optional.of(SpecificationFile.read(directory.resolve(SPECIFICATION)))
+                : Optional.empty();
+        Optional<LinearityResult> levels = Optional.empty();
+        Optional<String> sweep = Optional.empty();
+        if (recorded) {
+            Path resultFile = directory.resolve(RESULT);
+            JsonFields result = JsonFields.read(resultFile, LevelCheckFile.WHAT);
+            levels = LevelCheckFile.levelCheck(resultFile, result);
+            sweep = LevelCheckFile.sweepLine(resultFile, result);
+        }
+        Path frfFile = directory.resolve(FRF);
+        byte[] frfBytes = bytes(directory, FRF);
+        FrfCsvReader.Contents frf = FrfCsvReader.read(new ByteArrayInputStream(frfBytes), frfFile.toString());
+        return new Inputs(directory, specimen, specification, frf, levels, sweep, sha256(frfBytes));
+    }
+
+    /**
+     * Qualifies checked inputs again.
+     *
+     * @param in the run's inputs
+     * @return the run
+     */
+    public static RunDirectory analyse(Inputs in) {
+        QualificationResult result = Qualification.analyse(in.specimen(), in.frf().frf(), Optional.empty(),
+                ModalEstimator.defaults(), in.specification(), System.nanoTime());
+        if (in.levelCheck().isPresent()) {
+            result = Qualification.withLinearity(result, in.levelCheck().get(), in.specification());
+        }
+        return new RunDirectory(in.directory(), result, in.frf().metadata(), in.recordedSweep(), in.frfSha256());
+    }
+
+    /**
+     * Checks that a file of the run is there as a readable, non-empty file.
+     *
+     * @return whether it is there; false only for an optional file that is absent
+     */
+    private static boolean present(Path directory, String name, boolean required, String holding) throws IOException {
+        Path file = directory.resolve(name);
+        String expected = "; expected a file holding " + holding;
+        if (!Files.exists(file, LinkOption.NOFOLLOW_LINKS)) {
+            if (required) {
                 throw new AnalysisException("run directory " + directory + " has no " + name + "; expected " + FRF + " and "
                         + SPECIMEN + " (and " + SPECIFICATION + " to judge the limits)");
             }
+            return false;
         }
-        Specimen specimen = SpecimenFile.read(directory.resolve(SPECIMEN));
-        Path specFile = directory.resolve(SPECIFICATION);
-        Optional<Specification> specification = Files.isRegularFile(specFile)
-                ? Optional.of(SpecificationFile.read(specFile)) : Optional.empty();
-        FrfCsvReader.Contents frf = FrfCsvReader.read(directory.resolve(FRF));
-        QualificationResult result = Qualification.analyse(specimen, frf.frf(), Optional.empty(), ModalEstimator.defaults(),
-                specification, System.nanoTime());
-        Optional<org.tautline.analysis.specimen.LinearityResult> levels = LevelCheckFile.read(directory.resolve(RESULT));
-        if (levels.isPresent()) {
-            result = Qualification.withLinearity(result, levels.get(), specification);
+        String at = "run directory " + directory + ": " + name;
+        if (Files.isDirectory(file)) {
+            throw new AnalysisException(at + " is a folder" + expected);
         }
-        return new RunDirectory(directory, result, frf.metadata(), LevelCheckFile.sweepLine(directory.resolve(RESULT)));
+        if (!Files.exists(file)) {
+            throw new AnalysisException(at + " is a link to nothing" + expected);
+        }
+        if (!Files.isRegularFile(file)) {
+            throw new AnalysisException(at + " is not a regular file" + expected);
+        }
+        if (Files.size(file) == 0) {
+            throw new AnalysisException(at + " is empty" + expected);
+        }
+        return true;
+    }
+
+    private static byte[] bytes(Path directory, String name) throws IOException {
+        try {
+            return Files.readAllBytes(directory.resolve(name));
+        } catch (AccessDeniedException e) {
+            throw new AnalysisException("run directory " + directory + ": " + name + " cannot be read (permission denied);"
+                    + " expected a readable file");
+        }
+    }
+
+    /** @return the lower-case hex SHA-256 of the bytes */
+    static String sha256(byte[] bytes) {
+        try {
+            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("every Java platform has SHA-256", e);
+        }
     }
 }

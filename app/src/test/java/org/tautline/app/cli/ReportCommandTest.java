@@ -22,22 +22,18 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tautline.app.SafetyNotice;
 
-/** The demo's report, {@code report}, {@code export} and {@code lot}, read back with PDFBox's own text extraction. */
+/** The demo's report, {@code report} and {@code export}, read back with PDFBox's own text extraction. */
 class ReportCommandTest {
-    @TempDir
-    static Path dir;
     static Path runDir;
     static Path register;
     static JsonNode recorded;
 
     @BeforeAll
     static void runTheDemo() throws Exception {
-        runDir = dir.resolve("run");
-        register = dir.resolve("lots.sqlite");
-        CliRun demo = CliRun.of("demo", "--no-progress", "--out", runDir.toString(), "--lot", "LOT-7", "--register",
-                register.toString(), "--operator", "A. Tester");
-        assertEquals(0, demo.exitCode(), demo.err());
-        recorded = ResultJson.MAPPER.readTree(runDir.resolve("result.json").toFile());
+        DemoRunFixture demo = DemoRunFixture.get();
+        runDir = demo.runDir();
+        register = demo.register();
+        recorded = demo.recorded();
     }
 
     private static String text(Path pdf) throws Exception {
@@ -107,7 +103,7 @@ class ReportCommandTest {
             assertTrue(text.replace("\n", " ").contains(caution.substring(0, 30)), caution);
         }
         assertTrue(text.contains("Lot LOT-7"), "the lot section");
-        assertTrue(text.contains("Individuals chart of tensionN") || text.contains("fitNormalisedResidual"), text);
+        assertTrue(text.contains("Individuals chart of tension:") || text.contains("normalised residual of the fit"), text);
     }
 
     @Test
@@ -142,16 +138,6 @@ class ReportCommandTest {
     }
 
     @Test
-    void lotRefusesAMissingRegisterFileWithoutCreatingIt(@TempDir Path out) {
-        Path missing = out.resolve("none.sqlite");
-        CliRun run = CliRun.of("lot", "LOT-7", "--register", missing.toString());
-        assertEquals(1, run.exitCode());
-        assertEquals("tautline: register file " + missing.toAbsolutePath() + " does not exist; expected --register FILE|URL"
-                + " naming a lot register, or --add RUNDIR to start one\n", run.err().replace("\r", ""));
-        assertTrue(!Files.exists(missing));
-    }
-
-    @Test
     void exportWritesUnitsInTheHeaders(@TempDir Path out) throws Exception {
         CliRun run = CliRun.of("export", runDir.toString(), "--out", out.toString());
         assertEquals(0, run.exitCode(), run.err());
@@ -168,26 +154,5 @@ class ReportCommandTest {
         JsonNode verdict = ResultJson.MAPPER.readTree(out.resolve("verdict.json").toFile());
         assertEquals("PASS", verdict.get("outcome").asText());
         assertEquals(recorded.get("verdict").get("limits").size(), verdict.get("limits").size());
-    }
-
-    @Test
-    void lotPrintsTheStatisticsOfTheRegister() throws Exception {
-        CliRun add = CliRun.of("lot", "LOT-7", "--register", register.toString(), "--add", runDir.toString(), "--json");
-        assertEquals(0, add.exitCode(), add.err());
-        JsonNode root = ResultJson.MAPPER.readTree(add.out());
-        JsonNode tension = null;
-        for (JsonNode f : root.get("figures")) {
-            if (f.get("figure").asText().equals("tensionN")) {
-                tension = f;
-            }
-        }
-        assertTrue(tension != null, add.out());
-        assertTrue(tension.get("n").asInt() >= 2, "the demo's entry and the one just added");
-        assertEquals(recorded.get("properties").get("tensionN").asDouble(), tension.get("mean").asDouble(), 1e-9,
-                "the same run qualified twice gives the same tension");
-        assertEquals(135.0, tension.get("lowerLimit").asDouble());
-        assertEquals(165.0, tension.get("upperLimit").asDouble());
-        CliRun text = CliRun.of("lot", "LOT-7", "--register", register.toString());
-        assertTrue(text.out().contains("tensionN (N)"), text.out());
     }
 }
