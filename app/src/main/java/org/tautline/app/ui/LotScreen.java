@@ -20,6 +20,7 @@ import javax.swing.SwingWorker;
 import javax.swing.table.DefaultTableModel;
 
 import net.miginfocom.swing.MigLayout;
+import org.tautline.analysis.verdict.Figure;
 import org.tautline.app.lot.FigureStatistics;
 import org.tautline.app.lot.LotEntries;
 import org.tautline.app.lot.LotRegister;
@@ -171,7 +172,7 @@ final class LotScreen {
         }
         int tension = 0;
         for (int i = 0; i < statistics.size(); i++) {
-            if (statistics.get(i).key().equals("tensionN")) {
+            if (statistics.get(i).key().equals(Figure.TENSION.key())) {
                 tension = i;
             }
         }
