@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.util.List;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 
 import org.tautline.app.lot.FigureStatistics;
@@ -13,6 +14,7 @@ import org.tautline.app.report.QualificationReport;
 import org.tautline.app.report.ReportInfo;
 import org.tautline.app.report.RunDirectory;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Parameters;
@@ -21,9 +23,11 @@ import picocli.CommandLine.Spec;
 /** {@code tautline report}: the PDF report of a run directory, qualified again from its files. */
 @Command(name = "report", mixinStandardHelpOptions = true,
         description = "Write the PDF report of a run directory (frf.csv, specimen.json, spec.json), qualifying it"
-                + " again from its files. With --lot, the report also charts that lot from the register.",
+                + " again from its files. The test date, the air and the rig come from the run's setup.json (written"
+                + " by sweep); the options fill in what it lacks, and a value that differs from a recorded one is"
+                + " refused. With --lot, the report also charts that lot from the register.",
         exitCodeListHeading = "%nExit status (the report is written in each case but an error):%n",
-        exitCodeList = {"0:PASS, or no specification", "1:an error", "10:FAIL", "11:NOT_DETERMINABLE"})
+        exitCodeList = {"0:pass, or no specification", "1:an error", "10:fail", "11:not determinable"})
 final class ReportCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
@@ -45,9 +49,22 @@ final class ReportCommand implements Callable<Integer> {
                     + LotRegister.DEFAULT_FILE_NAME + " beside RUNDIR).")
     private String register;
 
+    @Option(names = "--report-number", paramLabel = "NUMBER", defaultValue = "",
+            description = "The lab's number for this report (printed on every page; \"not given\" without it).")
+    private String reportNumber;
+
+    @Option(names = "--test-date", paramLabel = "DATE",
+            description = "When the run was made, for a run folder that does not record it: 2026-11-02 or"
+                    + " 2026-11-02T09:14:00Z.")
+    private String testDate;
+
+    @Mixin
+    private SetupOptions setup;
+
     @Override
     public Integer call() throws IOException {
-        RunDirectory.Inputs inputs = RunDirectory.readInputs(runDir);
+        RunDirectory.Inputs inputs = RunDirectory.readInputs(runDir)
+                .withSetup(setup.setup(Optional.ofNullable(testDate).map(SetupOptions::testDate)));
         List<FigureStatistics> statistics = List.of();
         if (lot != null) {
             try (LotRegister r = LotRegister.openForQueries(register != null ? register : LotCommand.besideRuns(runDir))) {
@@ -55,8 +72,8 @@ final class ReportCommand implements Callable<Integer> {
             }
         }
         RunDirectory run = RunDirectory.analyse(inputs);
-        QualificationReport.write(run, new ReportInfo(operator, ReportInfo.SOFTWARE, Instant.now()), lot == null ? "" : lot,
-                statistics, pdf);
+        QualificationReport.write(run, new ReportInfo(operator, ReportInfo.SOFTWARE, Instant.now(), reportNumber),
+                lot == null ? "" : lot, statistics, pdf);
         spec.commandLine().getErr().println("tautline: wrote the report to " + pdf);
         return ExitCodes.of(run.result().verdict());
     }

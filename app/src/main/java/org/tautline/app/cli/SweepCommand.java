@@ -9,9 +9,12 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 
 import org.tautline.app.SafetyNotice;
+import org.tautline.app.trace.RunSetup;
+import org.tautline.app.trace.SetupFile;
 import org.tautline.driver.journal.JournaledSweep;
 import org.tautline.driver.spi.RigDrivers;
 import org.tautline.driver.sweep.SafetyLimits;
@@ -27,7 +30,8 @@ import picocli.CommandLine.Spec;
 /** {@code tautline sweep}: a journaled stepped-sine sweep on any rig, uniform or from a plan file. */
 @Command(name = "sweep", mixinStandardHelpOptions = true,
         description = "Run a stepped-sine sweep on a rig, journaling every step to RUNDIR/journal and writing"
-                + " RUNDIR/frf.csv. An interrupted run continues with 'tautline resume RUNDIR'.",
+                + " RUNDIR/frf.csv. The test date, and the rig file and the air when given, are recorded in"
+                + " RUNDIR/setup.json for the report. An interrupted run continues with 'tautline resume RUNDIR'.",
         exitCodeListHeading = "%nExit status:%n",
         exitCodeList = {"0:the sweep ran to its end", "1:an error; nothing was excited",
                 "3:the sweep was stopped; resume continues it", "4:a safety limit stopped the sweep",
@@ -114,6 +118,9 @@ final class SweepCommand implements Callable<Integer> {
     @Mixin
     private PluginFolders plugins;
 
+    @Mixin
+    private SetupOptions setup;
+
     @Override
     public Integer call() throws IOException {
         PrintWriter err = spec.commandLine().getErr();
@@ -130,7 +137,13 @@ final class SweepCommand implements Callable<Integer> {
             throw new IllegalArgumentException(runDir + " already holds a journal; continue it with 'tautline resume "
                     + runDir + "' or choose another --out");
         }
+        if (Files.exists(runDir.resolve(SetupFile.NAME))) {
+            throw new IllegalArgumentException(runDir + " already holds a " + SetupFile.NAME + " from another run; choose"
+                    + " another --out");
+        }
+        RunSetup recorded = setup.setup(Optional.of(Clock.systemUTC().instant()));
         Files.createDirectories(runDir);
+        SetupFile.write(runDir, recorded);
         err.print(SafetyNotice.asText("sim".equals(driver)));
         err.flush();
         try (SignalStop stop = new SignalStop()) {

@@ -107,6 +107,24 @@ public record QuantityFormat(TextStyle style) {
     }
 
     /**
+     * A number shown beside an uncertainty it does not have itself (a margin beside U), rounded to the same decimal
+     * place as that uncertainty would round a value (GUM 7.2.6), with its unit.
+     *
+     * @param value the number
+     * @param u the uncertainty that sets the decimal place; not positive and finite: six digits
+     * @param unit the unit in ASCII form, empty for none
+     * @return the text
+     */
+    public String valueLike(double value, double u, String unit) {
+        if (!Double.isFinite(value) || !(u > 0) || Double.isInfinite(u)) {
+            return value(value, unit);
+        }
+        Rounded r = round(value, u);
+        String written = unit(unit);
+        return r.value() + (r.exponent() == 0 ? "" : powerOfTen(r.exponent())) + (written.isEmpty() ? "" : " " + written);
+    }
+
+    /**
      * A rounded pair's value as one cell of a table: its digits with the power of ten ({@code 614e-6}).
      *
      * @param r a rounded pair
@@ -161,7 +179,7 @@ public record QuantityFormat(TextStyle style) {
         BigDecimal v = BigDecimal.valueOf(value).round(new MathContext(VALUE_DIGITS, RoundingMode.HALF_UP))
                 .stripTrailingZeros();
         int exponent = magnitude(v);
-        if (plain(exponent, Math.max(v.scale(), 0))) {
+        if (plain(exponent, 0)) {
             return v.toPlainString();
         }
         int engineering = Math.floorDiv(exponent, 3) * 3;

@@ -82,8 +82,8 @@ public final class LevelCheckFile {
         int steps = root.wholeNumber("steps");
         double rigTimeS = root.number("rigTimeS");
         boolean completed = root.bool("sweepCompleted");
-        return Optional.of(String.format(Locale.ROOT, "Sweep as recorded in %s: %d steps, rig time %s s,"
-                        + " wall time %s s, %s.", resultJson.getFileName(), steps, Figures.format(rigTimeS),
-                Figures.format(root.number("wallTimeS", Double.NaN)), completed ? "completed" : "stopped before the end"));
+        return Optional.of(String.format(Locale.ROOT, "Sweep as recorded in %s: %d steps, rig time %s,"
+                        + " wall time %s, %s.", resultJson.getFileName(), steps, ReportText.FORMAT.value(rigTimeS, "s"),
+                ReportText.FORMAT.value(root.number("wallTimeS", Double.NaN), "s"), completed ? "completed" : "stopped before the end"));
     }
 }

@@ -24,9 +24,9 @@ final class LotPages {
                 + " specification's limits (Montgomery, Introduction to Statistical Quality Control).", 8);
         w.row(new String[] {"figure", "n", "mean", "std", "min", "max", "Cpk", "unit"}, COLUMNS, true);
         for (FigureStatistics s : lot) {
-            w.row(new String[] {Figure.labelFor(s.key()), Integer.toString(s.n()), Figures.format(s.mean()), Figures.format(s.std()),
-                    Figures.format(s.min()), Figures.format(s.max()), Figures.format(s.cpk()),
-                    Figure.unitLabel(s.unit())}, COLUMNS, false);
+            w.row(new String[] {Figure.labelFor(s.key()), Integer.toString(s.n()), ReportText.FORMAT.number(s.mean()), ReportText.FORMAT.number(s.std()),
+                    ReportText.FORMAT.number(s.min()), ReportText.FORMAT.number(s.max()), ReportText.FORMAT.number(s.cpk()),
+                    s.unit().isEmpty() ? "none" : ReportText.FORMAT.unit(s.unit())}, COLUMNS, false);
         }
         for (FigureStatistics s : lot) {
             if (CHARTED.contains(s.key()) && s.n() > 1) {
@@ -37,9 +37,9 @@ final class LotPages {
                 } catch (IOException e) {
                     throw new UncheckedIOException(e);
                 }
-                w.line(String.format(java.util.Locale.ROOT, "mean %s, average moving range %s, UCL %s, LCL %s%s",
-                        Figures.format(s.chart().centre()), Figures.format(s.chart().averageMovingRange()),
-                        Figures.format(s.chart().upperControlLimit()), Figures.format(s.chart().lowerControlLimit()),
+                w.line(String.format(java.util.Locale.ROOT, "mean %s, average moving range %s, upper control limit %s, lower control limit %s%s",
+                        ReportText.FORMAT.number(s.chart().centre()), ReportText.FORMAT.number(s.chart().averageMovingRange()),
+                        ReportText.FORMAT.number(s.chart().upperControlLimit()), ReportText.FORMAT.number(s.chart().lowerControlLimit()),
                         s.chart().outOfControl().isEmpty() ? "; no point outside the limits"
                                 : "; outside the limits: qualification " + s.chart().outOfControl().stream()
                                 .map(i -> Integer.toString(i + 1)).toList()), 8);

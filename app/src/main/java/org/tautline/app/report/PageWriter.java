@@ -7,21 +7,27 @@ import java.io.UncheckedIOException;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDPage;
 import org.apache.pdfbox.pdmodel.PDPageContentStream;
+import org.apache.pdfbox.pdmodel.PDPageContentStream.AppendMode;
 import org.apache.pdfbox.pdmodel.common.PDRectangle;
 import org.apache.pdfbox.pdmodel.font.PDType1Font;
 import org.apache.pdfbox.pdmodel.font.Standard14Fonts;
 
-/** Lays text, tables and boxes down A4 pages top to bottom, starting a new page when one is full. */
+/**
+ * Lays text, tables and boxes down A4 pages top to bottom, starting a new page when one is full; when closed, it
+ * writes "page x of y" in every page's footer.
+ */
 final class PageWriter implements AutoCloseable {
     static final float MARGIN = 50f;
     static final float WIDTH = PDRectangle.A4.getWidth() - 2 * MARGIN;
+    /** The height a page offers between its margins. */
+    static final float PAGE_HEIGHT = PDRectangle.A4.getHeight() - 2 * MARGIN;
+    static final float HEADING_HEIGHT = 24;
     final PDType1Font regular = new PDType1Font(Standard14Fonts.FontName.HELVETICA);
     final PDType1Font bold = new PDType1Font(Standard14Fonts.FontName.HELVETICA_BOLD);
     private final PDDocument document;
     private final String footer;
     private PDPageContentStream stream;
     private float y;
-    private int pageNumber;
 
     PageWriter(PDDocument document, String footer) {
         this.document = document;
@@ -37,9 +43,7 @@ final class PageWriter implements AutoCloseable {
             PDPage page = new PDPage(PDRectangle.A4);
             document.addPage(page);
             stream = new PDPageContentStream(document, page);
-            pageNumber++;
             y = PDRectangle.A4.getHeight() - MARGIN;
-            text(regular, 7, MARGIN, 28, footer + "   page " + pageNumber, Color.GRAY);
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
@@ -70,10 +74,20 @@ final class PageWriter implements AutoCloseable {
         y -= pt;
     }
 
+    /** @return the height left on this page below the cursor */
+    float remaining() {
+        return y - MARGIN;
+    }
+
     void heading(String title) {
         reserve(8);
         float top = reserve(16);
         text(bold, 12, MARGIN, top - 12, title, Color.BLACK);
+    }
+
+    /** @return the height {@link #line} takes for this text, wrapped */
+    float lineHeight(String content, float size) {
+        return wrap(content, size, WIDTH).size() * (size + 3);
     }
 
     void line(String content, float size) {
@@ -84,8 +98,15 @@ final class PageWriter implements AutoCloseable {
     }
 
     void boldLine(String content, float size, Color colour) {
-        float top = reserve(size + 4);
-        text(bold, size, MARGIN, top - size, content, colour);
+        for (String part : wrap(bold, content, size, WIDTH)) {
+            float top = reserve(size + 4);
+            text(bold, size, MARGIN, top - size, part, colour);
+        }
+    }
+
+    /** @return the height {@link #boldLine} takes for this text, wrapped */
+    float boldLineHeight(String content, float size) {
+        return wrap(bold, content, size, WIDTH).size() * (size + 4);
     }
 
     /** One table row; {@code columnsPt} are the left edges; cells after the first are right-aligned to the next edge. */
@@ -125,11 +146,15 @@ final class PageWriter implements AutoCloseable {
     }
 
     private java.util.List<String> wrap(String content, float size, float widthPt) {
+        return wrap(regular, content, size, widthPt);
+    }
+
+    private java.util.List<String> wrap(PDType1Font font, String content, float size, float widthPt) {
         java.util.List<String> lines = new java.util.ArrayList<>();
         StringBuilder current = new StringBuilder();
         for (String word : clean(content).split(" ")) {
             String candidate = current.length() == 0 ? word : current + " " + word;
-            if (current.length() > 0 && width(regular, size, candidate) > widthPt) {
+            if (current.length() > 0 && width(font, size, candidate) > widthPt) {
                 lines.add(current.toString());
                 current = new StringBuilder(word);
             } else {
@@ -155,8 +180,19 @@ final class PageWriter implements AutoCloseable {
         return out.toString();
     }
 
+    /** Writes the footer, with "page x of y", on every page, then closes the last page. */
     @Override
     public void close() throws IOException {
         stream.close();
+        int pages = document.getNumberOfPages();
+        for (int i = 0; i < pages; i++) {
+            PDPage page = document.getPage(i);
+            try (PDPageContentStream footerStream = new PDPageContentStream(document, page, AppendMode.APPEND, true, true)) {
+                stream = footerStream;
+                String number = "page " + (i + 1) + " of " + pages;
+                text(regular, 7, MARGIN, 28, footer, Color.GRAY);
+                text(regular, 7, MARGIN + WIDTH - width(regular, 7, number), 28, number, Color.GRAY);
+            }
+        }
     }
 }

@@ -12,8 +12,23 @@ import org.apache.pdfbox.pdmodel.PDPageContentStream;
  * logarithmic y, series as lines or markers, horizontal reference lines and a legend.
  */
 final class PdfChart {
-    /** One data series. */
-    record Series(String name, double[] x, double[] y, Color colour, boolean markers, boolean dashed) {
+    /**
+     * One data series.
+     *
+     * @param yError half-length of each point's error bar (one standard uncertainty), empty for none
+     */
+    record Series(String name, double[] x, double[] y, Color colour, boolean markers, boolean dashed, double[] yError) {
+        Series(String name, double[] x, double[] y, Color colour, boolean markers, boolean dashed) {
+            this(name, x, y, colour, markers, dashed, new double[0]);
+        }
+
+        double low(int i) {
+            return i < yError.length && Double.isFinite(yError[i]) ? y[i] - yError[i] : y[i];
+        }
+
+        double high(int i) {
+            return i < yError.length && Double.isFinite(yError[i]) ? y[i] + yError[i] : y[i];
+        }
     }
 
     private final String title;
@@ -106,6 +121,18 @@ final class PdfChart {
                 if (ser.markers()) {
                     s.addRect(px - 1.5f, py - 1.5f, 3, 3);
                     s.fill();
+                    if (i < ser.yError().length && Double.isFinite(ser.yError()[i]) && ser.yError()[i] > 0
+                            && usable(ser.low(i))) {
+                        float lo = yPos(ser.low(i), yr, bottom, plotTop);
+                        float hi = yPos(ser.high(i), yr, bottom, plotTop);
+                        s.moveTo(px, lo);
+                        s.lineTo(px, hi);
+                        s.moveTo(px - 2.5f, lo);
+                        s.lineTo(px + 2.5f, lo);
+                        s.moveTo(px - 2.5f, hi);
+                        s.lineTo(px + 2.5f, hi);
+                        s.stroke();
+                    }
                 } else if (!open) {
                     s.moveTo(px, py);
                     open = true;
@@ -137,10 +164,13 @@ final class PdfChart {
         double lo = Double.POSITIVE_INFINITY;
         double hi = Double.NEGATIVE_INFINITY;
         for (Series ser : series) {
-            for (double v : xAxis ? ser.x() : ser.y()) {
-                if (xAxis ? Double.isFinite(v) : usable(v)) {
-                    lo = Math.min(lo, v);
-                    hi = Math.max(hi, v);
+            for (int i = 0; i < ser.x().length; i++) {
+                double[] values = xAxis ? new double[] {ser.x()[i]} : new double[] {ser.low(i), ser.high(i)};
+                for (double v : values) {
+                    if (xAxis ? Double.isFinite(v) : usable(v)) {
+                        lo = Math.min(lo, v);
+                        hi = Math.max(hi, v);
+                    }
                 }
             }
         }

@@ -6,11 +6,10 @@ import java.nio.file.AccessDeniedException;
 import java.nio.file.Files;
 import java.nio.file.LinkOption;
 import java.nio.file.Path;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
+import java.util.ArrayList;
 import java.util.Collections;
-import java.util.HexFormat;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
@@ -25,11 +24,15 @@ import org.tautline.app.qualify.Qualification;
 import org.tautline.app.qualify.QualificationResult;
 import org.tautline.app.qualify.SpecificationFile;
 import org.tautline.app.qualify.SpecimenFile;
+import org.tautline.app.trace.DataFile;
+import org.tautline.app.trace.RunSetup;
+import org.tautline.app.trace.SetupFile;
 
 /**
  * A run directory as {@code demo --out} writes it: {@code frf.csv} and {@code specimen.json} (required),
- * {@code spec.json} (optional: without it no limit is judged) and {@code result.json} (optional: without it there is
- * no level check and no recorded sweep). A file that is there must be readable: a folder, an empty file, a link to
+ * {@code spec.json} (optional: without it no limit is judged), {@code result.json} (optional: without it there is
+ * no level check and no recorded sweep) and {@code setup.json} (optional: the test date, the air and the rig,
+ * {@link SetupFile}). A file that is there must be readable: a folder, an empty file, a link to
  * nothing or content that cannot be read is refused, naming it, before anything is analysed. The qualification is
  * re-derived from these files; the fit is deterministic, so it gives the figures of the run. The level check needs
  * the rig, so its shifts are read from {@code result.json}.
@@ -40,9 +43,12 @@ import org.tautline.app.qualify.SpecimenFile;
  * @param recordedSweep the sweep as {@code result.json} recorded it (steps, rig and wall time), in words
  * @param frfSha256 the SHA-256 of the {@code frf.csv} bytes that were analysed, lower-case hex; empty when the
  *        result did not come from a run directory
+ * @param setup the run's recorded setup (test date, air, rig), {@link RunSetup#NONE} when none was recorded
+ * @param dataFiles every file of the folder the result rests on, with its SHA-256; empty when it was not read from
+ *        files
  */
 public record RunDirectory(Path directory, QualificationResult result, Map<String, String> metadata,
-                           Optional<String> recordedSweep, String frfSha256) {
+                           Optional<String> recordedSweep, String frfSha256, RunSetup setup, List<DataFile> dataFiles) {
     /** The FRF file name. */
     public static final String FRF = "frf.csv";
     /** The specimen file name. */
@@ -52,9 +58,24 @@ public record RunDirectory(Path directory, QualificationResult result, Map<Strin
     /** The recorded result; its level check is taken over, everything else is derived again. */
     public static final String RESULT = "result.json";
 
-    /** Copies the metadata. */
+    /** Copies the metadata and the files. */
     public RunDirectory {
         metadata = Collections.unmodifiableMap(new LinkedHashMap<>(metadata));
+        dataFiles = List.copyOf(dataFiles);
+    }
+
+    /**
+     * A qualification with a fingerprint but no setup or data files.
+     *
+     * @param directory where it is written
+     * @param result the qualification
+     * @param metadata the FRF metadata
+     * @param recordedSweep the sweep in words
+     * @param frfSha256 the SHA-256 of frf.csv, empty for none
+     */
+    public RunDirectory(Path directory, QualificationResult result, Map<String, String> metadata,
+                        Optional<String> recordedSweep, String frfSha256) {
+        this(directory, result, metadata, recordedSweep, frfSha256, RunSetup.NONE, List.of());
     }
 
     /**
@@ -80,10 +101,26 @@ public record RunDirectory(Path directory, QualificationResult result, Map<Strin
      * @param levelCheck the recorded level check, empty without one
      * @param recordedSweep the recorded sweep in words, empty without one
      * @param frfSha256 the SHA-256 of the {@code frf.csv} bytes, lower-case hex
+     * @param setup the recorded setup, {@link RunSetup#NONE} without {@code setup.json}
+     * @param dataFiles the files read, with their SHA-256
      */
     public record Inputs(Path directory, Specimen specimen, Optional<Specification> specification,
                          FrfCsvReader.Contents frf, Optional<LinearityResult> levelCheck, Optional<String> recordedSweep,
-                         String frfSha256) {
+                         String frfSha256, RunSetup setup, List<DataFile> dataFiles) {
+        /** Copies the files. */
+        public Inputs {
+            dataFiles = List.copyOf(dataFiles);
+        }
+
+        /**
+         * @param given setup values given now (command-line options)
+         * @return these inputs with what the recorded setup lacks filled in from {@code given}
+         * @throws AnalysisException when a given value differs from a recorded one
+         */
+        public Inputs withSetup(RunSetup given) {
+            return new Inputs(directory, specimen, specification, frf, levelCheck, recordedSweep, frfSha256,
+                    setup.with(given, directory.resolve(SetupFile.NAME).toString()), dataFiles);
+        }
     }
 
     /**
@@ -118,6 +155,7 @@ public record RunDirectory(Path directory, QualificationResult result, Map<Strin
         present(directory, SPECIMEN, true, "the specimen (JSON)");
         boolean judged = present(directory, SPECIFICATION, false, "the specification (JSON)");
         boolean recorded = present(directory, RESULT, false, "the recorded run (JSON)");
+        boolean setUp = present(directory, SetupFile.NAME, false, "the run's setup (JSON)");
         Specimen specimen = SpecimenFile.read(directory.resolve(SPECIMEN));
         Optional<Specification> specification = judged ? Optional.of(SpecificationFile.read(directory.resolve(SPECIFICATION)))
                 : Optional.empty();
@@ -129,10 +167,18 @@ public record RunDirectory(Path directory, QualificationResult result, Map<Strin
             levels = LevelCheckFile.levelCheck(resultFile, result);
             sweep = LevelCheckFile.sweepLine(resultFile, result);
         }
+        RunSetup setup = setUp ? SetupFile.read(directory) : RunSetup.NONE;
         Path frfFile = directory.resolve(FRF);
         byte[] frfBytes = bytes(directory, FRF);
         FrfCsvReader.Contents frf = FrfCsvReader.read(new ByteArrayInputStream(frfBytes), frfFile.toString());
-        return new Inputs(directory, specimen, specification, frf, levels, sweep, sha256(frfBytes));
+        List<DataFile> files = new ArrayList<>();
+        files.add(DataFile.of(FRF, frfBytes));
+        for (String name : new String[] {SPECIMEN, SPECIFICATION, RESULT, SetupFile.NAME}) {
+            if (Files.exists(directory.resolve(name), LinkOption.NOFOLLOW_LINKS)) {
+                files.add(DataFile.of(name, bytes(directory, name)));
+            }
+        }
+        return new Inputs(directory, specimen, specification, frf, levels, sweep, sha256(frfBytes), setup, files);
     }
 
     /**
@@ -147,7 +193,8 @@ public record RunDirectory(Path directory, QualificationResult result, Map<Strin
         if (in.levelCheck().isPresent()) {
             result = Qualification.withLinearity(result, in.levelCheck().get(), in.specification());
         }
-        return new RunDirectory(in.directory(), result, in.frf().metadata(), in.recordedSweep(), in.frfSha256());
+        return new RunDirectory(in.directory(), result, in.frf().metadata(), in.recordedSweep(), in.frfSha256(),
+                in.setup(), in.dataFiles());
     }
 
     /**
@@ -192,10 +239,6 @@ public record RunDirectory(Path directory, QualificationResult result, Map<Strin
 
     /** @return the lower-case hex SHA-256 of the bytes */
     static String sha256(byte[] bytes) {
-        try {
-            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("every Java platform has SHA-256", e);
-        }
+        return DataFile.sha256(bytes);
     }
 }

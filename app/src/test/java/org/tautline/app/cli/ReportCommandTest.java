@@ -7,10 +7,8 @@ import java.io.File;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Iterator;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import org.apache.pdfbox.Loader;
@@ -42,53 +40,42 @@ class ReportCommandTest {
         }
     }
 
-    /** Six significant digits as {@link String#format} gives them: the report's stated precision. */
-    private static String six(double value) {
-        return String.format(Locale.ROOT, "%.6g", value);
-    }
-
-    /** Every number the run recorded in result.json (except the simulated truth), with its path. */
-    private static void numbers(String path, JsonNode node, List<Map.Entry<String, Double>> out) {
-        if (node.isNumber()) {
-            out.add(Map.entry(path, node.asDouble()));
-        } else if (node.isArray()) {
-            for (int i = 0; i < node.size(); i++) {
-                numbers(path + "[" + i + "]", node.get(i), out);
-            }
-        } else if (node.isObject()) {
-            for (Iterator<String> it = node.fieldNames(); it.hasNext(); ) {
-                String key = it.next();
-                numbers(path + "." + key, node.get(key), out);
-            }
+    /**
+     * A value and its standard uncertainty as GUM 7.2.6 asks (JCGM 100:2008, from memory): u to two significant
+     * digits, the value to the same decimal place; written here with String.format, apart from the project's
+     * formatter, for values whose uncertainty is between 0.001 and 100.
+     */
+    private static String[] gum(double value, double u) {
+        int decimals = Math.max(0, 1 - (int) Math.floor(Math.log10(u)));
+        String rounded = String.format(Locale.ROOT, "%." + decimals + "f", u);
+        if (rounded.replace(".", "").replaceFirst("^0+", "").length() > 2) {
+            decimals = Math.max(0, decimals - 1); // the carry: 0.0996 becomes 0.10
         }
+        return new String[] {String.format(Locale.ROOT, "%." + decimals + "f", value),
+                String.format(Locale.ROOT, "%." + decimals + "f", u)};
     }
 
     @Test
-    void theDemoReportHoldsEveryFigureTheRunRecorded() throws Exception {
+    void theDemoReportWritesEveryModeAndPropertyRoundedToItsUncertainty() throws Exception {
         String text = text(runDir.resolve("report.pdf"));
-        List<Map.Entry<String, Double>> figures = new ArrayList<>();
-        for (String section : List.of("modes", "properties", "quality", "residuals", "linearity", "verdict")) {
-            numbers(section, recorded.get(section), figures);
-        }
-        numbers("rigTimeS", recorded.get("rigTimeS"), figures);
-        numbers("steps", recorded.get("steps"), figures);
         List<String> missing = new ArrayList<>();
-        for (Map.Entry<String, Double> f : figures) {
-            String path = f.getKey();
-            double v = f.getValue();
-            if (path.endsWith("truthFrequencyHz") || path.endsWith("frequencyErrorRelative") || path.endsWith(".im")
-                    && v == 0.0) {
-                continue; // the simulated truth is not part of the report; real modal constants have no imaginary part
-            }
-            String expected = path.endsWith("harmonic") || path.endsWith("polarisation") || path.endsWith("steps")
-                    ? Long.toString(Math.round(v)) : six(v);
-            if (!text.contains(expected)) {
-                missing.add(path + " = " + expected);
+        for (JsonNode mode : recorded.get("modes")) {
+            double u = mode.get("frequencyStdHz").asDouble();
+            if (u >= 1e-3 && u < 100) {
+                String[] pair = gum(mode.get("frequencyHz").asDouble(), u);
+                if (!text.contains(pair[0] + " " + pair[1])) {
+                    missing.add("mode " + pair[0] + " " + pair[1]);
+                }
             }
         }
-        assertEquals(List.of(), missing, "figures of result.json not in the report");
-        assertTrue(figures.size() > 100, "the run recorded " + figures.size() + " figures");
-        assertTrue(text.contains("Verdict: " + recorded.get("verdict").get("outcome").asText()), text);
+        JsonNode p = recorded.get("properties");
+        String[] tension = gum(p.get("tensionN").asDouble(), p.get("tensionStdN").asDouble());
+        String tensionText = "(" + tension[0] + " ± " + tension[1] + ") N";
+        if (!text.contains(tensionText)) {
+            missing.add("tension " + tensionText);
+        }
+        assertEquals(List.of(), missing, "GUM 7.2.6 rounding (from memory) not found in the report");
+        assertTrue(recorded.get("modes").size() >= 6, "the demo finds its modes");
         assertTrue(text.contains("Verdict: PASS"), "the level check is taken from result.json, so the demo passes");
         for (JsonNode limit : recorded.get("verdict").get("limits")) {
             assertTrue(text.contains(limit.get("name").asText()), limit.toString());
@@ -107,6 +94,72 @@ class ReportCommandTest {
     }
 
     @Test
+    void theDemoReportNamesEveryFigureForPeopleAndSaysWhatWasNotGiven() throws Exception {
+        String text = text(runDir.resolve("report.pdf"));
+        for (String programName : List.of("f1Hz", "tensionN", "linearityShift1", "inharmonicityB", "dampingRatio1",
+                "NOT_DETERMINABLE", "PINNED_LINE_FIT", "0.00000", "+/-")) {
+            assertTrue(!text.contains(programName), "'" + programName + "' reaches the report");
+        }
+        assertTrue(text.contains("Report number: not given"), "no report number is made up");
+        assertTrue(text.contains("Tested: not given"), "the demo's run folder records no test date");
+        assertTrue(text.contains("temperature not given, relative humidity not given"), "no air is made up");
+        assertTrue(text.contains("Specification: demo tie wire"), "the specification by name");
+        assertTrue(text.contains("No rig file was recorded for this run"), "no serial is made up");
+        try (PDDocument document = Loader.loadPDF(runDir.resolve("report.pdf").toFile())) {
+            int pages = document.getNumberOfPages();
+            assertTrue(text.contains("page 1 of " + pages) && text.contains("page " + pages + " of " + pages), text);
+        }
+        // SHA-256 (FIPS 180-4) of frf.csv, computed here by the JDK's own digest
+        String sha = java.util.HexFormat.of().formatHex(java.security.MessageDigest.getInstance("SHA-256")
+                .digest(Files.readAllBytes(runDir.resolve("frf.csv"))));
+        assertTrue(text.contains(sha), "the SHA-256 of frf.csv");
+        assertTrue(text.contains("Harmonic series: f_n / n against n"), "the plot of f_n/n against n²");
+        assertTrue(text.contains("Receptance phase against frequency"), "the phase plot");
+        assertTrue(text.contains("Quality of each FRF line") || text.contains("Coherence of each FRF line"), "quality plot");
+    }
+
+    @Test
+    void reportCarriesTheRigFileTheAirAndTheReportNumberAndFlagsAnExpiredCalibration(@TempDir Path out)
+            throws Exception {
+        Path folder = DemoRunFixture.get().copyInputs(out.resolve("run"));
+        Path rig = out.resolve("rig.json");
+        Files.writeString(rig, "{\"name\": \"bench 2\", \"instruments\": ["
+                + "{\"role\": \"force sensor\", \"serial\": \"FS10-0042\", \"calibrationCertificate\": \"CAL-17\","
+                + " \"calibrationDue\": \"2027-01-31\"},"
+                + "{\"role\": \"response sensor\", \"serial\": \"LV-7781\", \"calibrationDue\": \"2026-03-31\"}]}");
+        Path pdf = out.resolve("r.pdf");
+        CliRun run = CliRun.of("report", folder.toString(), "--pdf", pdf.toString(), "--rig-file", rig.toString(),
+                "--temperature-c", "21.5", "--humidity-pct", "45", "--test-date", "2026-11-02T09:14:00Z",
+                "--report-number", "QR-0153");
+        assertEquals(0, run.exitCode(), run.err());
+        String text = text(pdf).replace("\n", " ");
+        assertTrue(text.contains("Report number: QR-0153"), text);
+        assertTrue(text.contains("Tested: 2026-11-02 09:14 UTC"), text);
+        assertTrue(text.contains("temperature 21.5 °C, relative humidity 45 %"), text);
+        assertTrue(text.contains("FS10-0042") && text.contains("CAL-17") && text.contains("2027-01-31"), text);
+        assertTrue(text.contains("Calibration expired: response sensor (serial LV-7781) was due on 2026-03-31, before"
+                + " the test"), text);
+        assertTrue(text.contains("certificate"), text);
+    }
+
+    @Test
+    void aSetupRecordedInTheRunFolderIsNotReplaced(@TempDir Path out) throws Exception {
+        Path folder = DemoRunFixture.get().copyInputs(out.resolve("run"));
+        Files.writeString(folder.resolve("setup.json"), "{\"testedAt\": \"2026-11-02T09:14:00Z\", \"temperatureC\": 21.5}");
+        CliRun run = CliRun.of("report", folder.toString(), "--pdf", out.resolve("r.pdf").toString(), "--temperature-c", "23");
+        assertEquals(1, run.exitCode());
+        assertEquals("tautline: " + folder.resolve("setup.json") + " records the temperature (°C) 21.5; the temperature"
+                + " (°C) given now (23.0) differs, and a value recorded at the test is not replaced; leave the option out,"
+                + " or report another run folder", run.err().strip());
+        assertTrue(!Files.exists(out.resolve("r.pdf")), "no report is written");
+        CliRun again = CliRun.of("report", folder.toString(), "--pdf", out.resolve("r.pdf").toString(), "--humidity-pct",
+                "40");
+        assertEquals(0, again.exitCode(), again.err());
+        String text = text(out.resolve("r.pdf"));
+        assertTrue(text.contains("temperature 21.5 °C, relative humidity 40 %"), "recorded and given values together");
+    }
+
+    @Test
     void reportCommandRenders(@TempDir Path out) throws Exception {
         Path pdf = out.resolve("again.pdf");
         CliRun run = CliRun.of("report", runDir.toString(), "--pdf", pdf.toString(), "--operator", "B. Checker", "--lot", "LOT-7",
@@ -114,9 +167,11 @@ class ReportCommandTest {
         assertEquals(0, run.exitCode(), run.err());
         String text = text(pdf);
         assertTrue(text.contains("Operator: B. Checker"));
-        assertTrue(text.contains(six(recorded.get("properties").get("tensionN").asDouble())));
+        JsonNode p = recorded.get("properties");
+        String[] tension = gum(p.get("tensionN").asDouble(), p.get("tensionStdN").asDouble());
+        assertTrue(text.contains("(" + tension[0] + " ± " + tension[1] + ") N"), "tension as GUM 7.2.6 rounds it");
         try (PDDocument document = Loader.loadPDF(pdf.toFile())) {
-            assertTrue(document.getNumberOfPages() >= 2 && document.getNumberOfPages() <= 5, "pages " + document.getNumberOfPages());
+            assertTrue(document.getNumberOfPages() >= 2 && document.getNumberOfPages() <= 7, "pages " + document.getNumberOfPages());
             var image = new PDFRenderer(document).renderImageWithDPI(0, 40);
             int dark = 0;
             for (int y = 0; y < image.getHeight(); y++) {
