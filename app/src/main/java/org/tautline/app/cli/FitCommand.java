@@ -16,10 +16,11 @@ import org.tautline.analysis.frf.FrfCsvReader;
 import org.tautline.analysis.modal.FittedMode;
 import org.tautline.analysis.modal.ModalEstimate;
 import org.tautline.analysis.modal.ModalEstimator;
-import org.tautline.analysis.modal.Mode;
 import org.tautline.analysis.specimen.LinearityResult;
 import org.tautline.analysis.specimen.Specimen;
 import org.tautline.analysis.verdict.Specification;
+import org.tautline.app.format.QuantityFormat;
+import org.tautline.app.format.Rounded;
 import org.tautline.app.qualify.Qualification;
 import org.tautline.app.qualify.QualificationResult;
 import org.tautline.app.report.LevelCheckFile;
@@ -34,14 +35,15 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code tautline fit}: the modal model of an FRF file, and with a specimen its physics and verdict. */
 @Command(name = "fit", mixinStandardHelpOptions = true,
-        description = "Fit a damped modal model to an FRF CSV file (poles by LSCF with automatic mode choice, modal"
-                + " constants by LSFD, joint refinement with standard errors). With --specimen, also number the"
+        description = "Fit a damped modal model to an FRF CSV file: find the resonances over a range of model orders and"
+                + " keep those that stay put (the stable ones), fit each mode's strength with the resonances held fixed,"
+                + " then refine everything together to get a standard error for every figure. With --specimen, also number the"
                 + " harmonics and read tension, bending stiffness and positions; with --spec, judge them. The level"
                 + " check needs the rig: its figure is read from the run's result.json beside the FRF file (or"
                 + " --level-check FILE) when there is one.",
         exitCodeListHeading = "%nExit status:%n",
-        exitCodeList = {"0:PASS, or no --spec given", "1:an error (a file that cannot be read, a bad option)",
-                "10:FAIL", "11:NOT_DETERMINABLE"})
+        exitCodeList = {"0:pass, or no --spec given", "1:an error (a file that cannot be read, a bad option)",
+                "10:fail", "11:not determinable"})
 final class FitCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
@@ -83,7 +85,8 @@ final class FitCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         if (specimenFile == null) {
             ModalEstimate estimate = estimator.estimate(frf);
-            out.print(json ? ResultJson.MAPPER.writeValueAsString(modalJson(estimate)) + "\n" : modalText(estimate));
+            out.print(json ? ResultJson.MAPPER.writeValueAsString(modalJson(estimate)) + "\n"
+                    : modalText(estimate, QuantityFormat.forStandardOutput()));
         } else {
             Specimen specimen = SpecimenFile.read(specimenFile);
             Optional<Specification> specification = specificationFile == null ? Optional.empty()
@@ -137,23 +140,33 @@ final class FitCommand implements Callable<Integer> {
         return root;
     }
 
-    private static String modalText(ModalEstimate estimate) {
-        StringBuilder out = new StringBuilder(String.format(Locale.ROOT, "Modes in %.4g .. %.4g Hz%n", estimate.bandLowHz(),
-                estimate.bandHighHz()));
-        out.append(String.format(Locale.ROOT, "%12s %10s %10s %10s %12s %12s%n", "f (Hz)", "+/-", "zeta", "+/-", "A re (1/kg)",
-                "A im (1/kg)"));
-        for (FittedMode f : estimate.modes()) {
-            Mode m = f.mode();
-            out.append(String.format(Locale.ROOT, "%12.4f %10.4f %10.6f %10.6f %12.5g %12.5g%n", m.frequencyHz(),
-                    f.frequencyStdHz(), m.dampingRatio(), f.dampingRatioStd(), m.modalConstant().getReal(),
-                    m.modalConstant().getImaginary()));
+    static String modalText(ModalEstimate estimate, QuantityFormat f) {
+        String pm = f.style().plusMinus();
+        StringBuilder out = new StringBuilder(String.format(Locale.ROOT, "Modes in %s to %s (estimate %s standard error)%n",
+                f.value(estimate.bandLowHz(), "Hz"), f.value(estimate.bandHighHz(), "Hz"), pm));
+        out.append(String.format(Locale.ROOT, "%14s %9s %13s %9s %12s %12s%n", "f (Hz)", pm, "damping ratio", pm,
+                "A re (1/kg)", "A im (1/kg)"));
+        for (FittedMode m : estimate.modes()) {
+            String[] freq = cells(f, m.mode().frequencyHz(), m.frequencyStdHz());
+            String[] zeta = cells(f, m.mode().dampingRatio(), m.dampingRatioStd());
+            out.append(String.format(Locale.ROOT, "%14s %9s %13s %9s %12.5g %12.5g%n", freq[0], freq[1], zeta[0], zeta[1],
+                    m.mode().modalConstant().getReal(), m.mode().modalConstant().getImaginary()));
         }
         if (estimate.modes().isEmpty()) {
             out.append("  no mode found in the band\n");
         }
         estimate.quality().ifPresent(q -> out.append(String.format(Locale.ROOT,
-                "Fit: normalised residual %.4g, correlation %.6f%n", q.normalisedResidual(), q.correlation())));
+                "Fit: normalised residual %s, correlation %s%n", f.number(q.normalisedResidual()), f.number(q.correlation()))));
         estimate.warnings().forEach(w -> out.append("note: ").append(w).append('\n'));
         return out.toString();
+    }
+
+    /** A value and its standard error as two cells, rounded together (GUM 7.2.6). */
+    private static String[] cells(QuantityFormat f, double value, double u) {
+        if (!Double.isFinite(value) || !(u > 0) || Double.isInfinite(u)) {
+            return new String[] {f.number(value), Double.isNaN(u) ? QuantityFormat.NOT_EVALUATED : f.number(u)};
+        }
+        Rounded r = f.round(value, u);
+        return new String[] {f.valueCell(r), f.uncertaintyCell(r)};
     }
 }

@@ -12,6 +12,8 @@ import java.util.concurrent.Callable;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.tautline.analysis.AnalysisException;
+import org.tautline.analysis.verdict.Figure;
+import org.tautline.app.format.QuantityFormat;
 import org.tautline.app.lot.FigureStatistics;
 import org.tautline.app.lot.LotEntries;
 import org.tautline.app.lot.LotEntry;
@@ -29,9 +31,9 @@ import picocli.CommandLine.Model.CommandSpec;
         description = "Print per-figure statistics of a lot from the lot register (n, mean, std, min, max, Cpk against"
                 + " the specification) with its individuals-chart limits. --add RUNDIR appends a run first.",
         exitCodeListHeading = "%nExit status:%n",
-        exitCodeList = {"0:done; with --add, the added run's verdict is PASS (or it has no specification)",
-                "1:an error", "10:with --add, the added run's verdict is FAIL",
-                "11:with --add, the added run's verdict is NOT_DETERMINABLE"})
+        exitCodeList = {"0:done; with --add, the added run's verdict is pass (or it has no specification)",
+                "1:an error", "10:with --add, the added run's verdict is fail",
+                "11:with --add, the added run's verdict is not determinable"})
 final class LotCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
@@ -94,13 +96,19 @@ final class LotCommand implements Callable<Integer> {
             out.println("Lot " + lot + " has no qualification in " + location);
         } else {
             out.printf(Locale.ROOT, "Lot %s: %d qualification%s%n", lot, entries.size(), entries.size() == 1 ? "" : "s");
-            out.printf(Locale.ROOT, "%-30s %4s %13s %13s %13s %13s %8s %13s %13s%n", "figure", "n", "mean", "std", "min", "max",
-                    "Cpk", "LCL", "UCL");
+            QuantityFormat f = QuantityFormat.forStandardOutput();
+            out.printf(Locale.ROOT, "%-40s %4s %11s %11s %11s %11s %6s %11s %11s%n", "figure", "n", "mean", "std", "min",
+                    "max", "Cpk", "LCL", "UCL");
             for (FigureStatistics s : statistics) {
-                out.printf(Locale.ROOT, "%-30s %4d %13.6g %13.6g %13.6g %13.6g %8.3f %13.6g %13.6g%n",
-                        s.key() + (s.unit().isEmpty() ? "" : " (" + s.unit() + ")"), s.n(), s.mean(), s.std(), s.min(), s.max(),
-                        s.cpk(), s.chart().lowerControlLimit(), s.chart().upperControlLimit());
+                out.printf(Locale.ROOT, "%-40s %4d %11s %11s %11s %11s %6s %11s %11s%n",
+                        Figure.labelFor(s.key()) + (s.unit().isEmpty() ? "" : " (" + f.unit(s.unit()) + ")"), s.n(),
+                        f.number(s.mean()), f.number(s.std()), f.number(s.min()), f.number(s.max()),
+                        Double.isFinite(s.cpk()) ? String.format(Locale.ROOT, "%.2f", s.cpk()) : "-",
+                        f.number(s.chart().lowerControlLimit()), f.number(s.chart().upperControlLimit()));
             }
+            out.println("std: sample standard deviation; Cpk against the specification's limits (- without both a limit"
+                    + " and a spread); LCL, UCL: the individuals chart's control limits, mean -/+ 2.66 times the average"
+                    + " moving range (Montgomery, Introduction to Statistical Quality Control).");
         }
         out.flush();
         return status;

@@ -11,6 +11,7 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.tautline.analysis.frf.FrfCsvWriter;
 import org.tautline.analysis.modal.FittedMode;
+import org.tautline.app.format.QuantityFormat;
 import org.tautline.driver.journal.JournalHeader;
 import org.tautline.driver.journal.JournalReader;
 import org.tautline.driver.sweep.LevelMode;
@@ -61,7 +62,7 @@ final class SweepReport {
         if (json) {
             out.println(ResultJson.MAPPER.writeValueAsString(json(result, header, journal, frfFiles)));
         } else {
-            out.println(text(result, runDir, journal, frfFiles));
+            out.println(text(result, runDir, journal, frfFiles, QuantityFormat.forStandardOutput()));
         }
         out.flush();
         err.flush();
@@ -77,12 +78,13 @@ final class SweepReport {
         return String.format(Locale.ROOT, "%.4g %s", pass.level(), result.plan().levelMode() == LevelMode.FORCE ? "N" : "V");
     }
 
-    private static String text(SweepResult result, Path runDir, Path journal, Map<Integer, Path> frfFiles) {
+    private static String text(SweepResult result, Path runDir, Path journal, Map<Integer, Path> frfFiles,
+                               QuantityFormat f) {
         StringBuilder s = new StringBuilder();
         int steps = result.steps().size();
         switch (result.status()) {
-            case COMPLETED -> s.append(String.format(Locale.ROOT, "sweep complete: %d steps, rig time %.1f s; wrote %s and %s",
-                    steps, result.rigTimeS(), journal, String.join(", ", frfFiles.values().stream().map(Path::toString)
+            case COMPLETED -> s.append(String.format(Locale.ROOT, "sweep complete: %d steps, rig time %s; wrote %s and %s",
+                    steps, f.value(Math.round(result.rigTimeS() * 10) / 10.0, "s"), journal, String.join(", ", frfFiles.values().stream().map(Path::toString)
                             .toList())));
             case CANCELLED -> s.append("sweep stopped after ").append(steps).append(" steps (").append(result.reason())
                     .append("); the output is off and the journal keeps every completed step. Continue it with"
@@ -98,11 +100,13 @@ final class SweepReport {
         }
         if (result.passes().size() > 1 || result.plan().adaptive()) {
             for (SweepPass pass : result.passes()) {
-                s.append(String.format(Locale.ROOT, "%n  pass %d, level %s, %s: %d steps, %.1f s", pass.index() + 1,
-                        level(result, pass), pass.direction().label(), pass.points().size(), pass.rigTimeS()));
+                s.append(String.format(Locale.ROOT, "%n  pass %d, level %s, %s: %d steps, %s", pass.index() + 1,
+                        level(result, pass), pass.direction().label(), pass.points().size(),
+                        f.value(Math.round(pass.rigTimeS() * 10) / 10.0, "s")));
                 for (FittedMode m : pass.modes()) {
-                    s.append(String.format(Locale.ROOT, "%n    f %.4f +- %.4f Hz, damping ratio %.5f +- %.5f",
-                            m.mode().frequencyHz(), m.frequencyStdHz(), m.mode().dampingRatio(), m.dampingRatioStd()));
+                    s.append(String.format(Locale.ROOT, "%n    f %s, damping ratio %s",
+                            f.withUncertainty(m.mode().frequencyHz(), m.frequencyStdHz(), "Hz"),
+                            f.withUncertainty(m.mode().dampingRatio(), m.dampingRatioStd(), "")));
                 }
             }
         }

@@ -78,7 +78,7 @@ class LotCommandTest {
 
         CliRun text = CliRun.of("lot", "LOT-7", "--register", register.toString());
         assertEquals(0, text.exitCode(), text.err());
-        assertTrue(text.out().contains("tensionN (N)"), text.out());
+        assertTrue(text.out().contains("tension (N)"), text.out()); // the figure named for people, not by its key
     }
 
     @Test
