@@ -183,7 +183,10 @@ final class PdfChart {
         if (hi - lo <= 1e-9 * Math.max(Math.abs(hi), Math.abs(lo))) {
             hi = lo;
         }
-        double pad = hi > lo ? (xAxis ? 0 : 0.08 * (hi - lo)) : Math.max(Math.abs(lo) * 0.05, 1e-12);
+        boolean counted = xAxis && series.stream().allMatch(ser -> java.util.Arrays.stream(ser.x())
+                .allMatch(v -> v == Math.rint(v)));
+        double pad = hi > lo ? (xAxis ? (counted ? 0.03 * (hi - lo) : 0) : 0.08 * (hi - lo))
+                : Math.max(Math.abs(lo) * 0.05, 1e-12);
         return new double[] {lo - pad, hi + pad};
     }
 
