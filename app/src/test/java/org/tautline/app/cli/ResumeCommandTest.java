@@ -48,7 +48,7 @@ class ResumeCommandTest {
                 "--plugins", dir.toString());
         assertEquals(1, wrongOption.exitCode());
         assertTrue(wrongOption.err().endsWith("tautline: the sim rig of journal " + cut.resolve("journal") + " has no"
-                + " option 'port'; its options are scenario, seed\n"), wrongOption.err());
+                + " option 'port'; its options are scenario, seed, tensionN\n"), wrongOption.err());
 
         CliRun r = CliRun.of("resume", cut.toString(), "--no-progress", "--plugins", dir.toString());
         assertEquals(0, r.exitCode(), r.err());

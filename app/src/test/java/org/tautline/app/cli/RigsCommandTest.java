@@ -22,8 +22,12 @@ class RigsCommandTest {
         assertEquals("Rig drivers:", lines.get(0));
         assertTrue(lines.contains("  sim        the simulated rig: a time-domain model of a tensioned wire, shaker and"
                 + " sensors (no hardware)"), r.out());
-        assertTrue(lines.contains("    seed         default 1              seed of the simulated sensor noise; the same"
-                + " seed gives the same samples"), r.out());
+        assertTrue(lines.contains("    seed         default none           none for the demo wire as built (sensor noise"
+                + " seed 1), or a whole number 0 or more that draws one specimen of the wire's invented lot, with its"
+                + " own tension, mass per length, bending stiffness and damping, and seeds the sensor noise; the same"
+                + " seed gives the same specimen and samples"), r.out());
+        assertTrue(lines.contains("    tensionN     default none N         none for the specimen's own true tension"
+                + " (146.5 N as built), or the true tension to give it, 120 to 180 N"), r.out());
         assertTrue(lines.contains("    journal      (required)             the journal file to play back"), r.out());
         assertTrue(lines.contains("Serial ports:"), r.out());
         assertEquals("Choose one with: tautline sweep --rig NAME [--option KEY=VALUE]... or --rig serial:PORT",

@@ -41,7 +41,7 @@ class SweepCommandTest {
         JournalContents journal = JournalReader.read(run.resolve("journal"));
         assertEquals(9, journal.steps().size());
         assertEquals("demo-wire-clean", journal.header().options().get("scenario"));
-        assertEquals("1", journal.header().options().get("seed"), "the default is recorded too");
+        assertEquals("none", journal.header().options().get("seed"), "the default is recorded too");
         Frf frf = FrfCsvReader.read(run.resolve("frf.csv")).frf();
         assertEquals(9, frf.size());
         for (int i = 0; i < 9; i++) {
@@ -66,7 +66,7 @@ class SweepCommandTest {
                 bad.err());
         CliRun unknown = CliRun.of(sweep(dir, dir.resolve("b"), "--option", "port=/dev/ttyS0"));
         assertTrue(unknown.err().endsWith("tautline: rig driver 'sim' has no option 'port'; its options are: scenario,"
-                + " seed\n"), unknown.err());
+                + " seed, tensionN\n"), unknown.err());
         CliRun malformed = CliRun.of(sweep(dir, dir.resolve("c"), "--option", "seed"));
         assertEquals("tautline: --option 'seed': expected KEY=VALUE, for example seed=7", malformed.err().strip());
         CliRun plan = CliRun.of("sweep", "--rig", "sim", "--from", "300", "--to", "150", "--steps", "9",

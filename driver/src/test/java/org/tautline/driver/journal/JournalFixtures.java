@@ -19,10 +19,10 @@ import org.tautline.driver.sweep.SweepPlan;
 
 /** Shared set-up of the journal tests: the clean simulated demo wire and a short plan. */
 final class JournalFixtures {
-    /** The simulated rig's options as the sim driver records them. */
-    static final Map<String, String> SIM_OPTIONS = Map.of("scenario", "demo-wire-clean", "seed", "1");
+    /** The simulated rig's options as the sim driver records them: the demo wire as built, noise seed 1. */
+    static final Map<String, String> SIM_OPTIONS = Map.of("scenario", "demo-wire-clean", "seed", "none");
     /**
-     * 13 steps over 150..300 Hz around the demo wire's fundamental (about 228 Hz). 400 settle cycles are
+     * 13 steps over 150..300 Hz around the demo wire's fundamental (about 226 Hz). 400 settle cycles are
      * at least 2.7 s, 13 time constants of the fundamental (zeta about 0.35 %): a step's leftover
      * transient is below e^-13 = 2e-6 of its start, so a resumed sweep (which starts at rest) settles
      * to what an uninterrupted one measures.

@@ -53,7 +53,7 @@ class JournalReadBackTest {
         assertEquals(run.steps(), back.completedSteps(), "steps read back equal the steps run, pass and phase included");
         assertTrue(back.finished());
         assertEquals("sim", back.header().driver());
-        assertEquals(Map.of("scenario", "demo-wire-clean", "seed", "1"), back.header().options());
+        assertEquals(Map.of("scenario", "demo-wire-clean", "seed", "none"), back.header().options());
         assertEquals(JournalFixtures.PLAN, back.header().plan());
         assertEquals(JournalFixtures.CLOCK.instant(), back.header().startedAt());
         assertEquals("displacement", back.header().channels().get(1).quantity());

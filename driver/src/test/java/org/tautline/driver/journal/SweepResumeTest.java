@@ -224,7 +224,7 @@ class SweepResumeTest {
         RigException unknown = assertThrows(RigException.class, () -> JournaledSweep.resume(DRIVERS, file,
                 Map.of("port", "/dev/ttyUSB1"), n -> { }, SweepEventListener.NONE, SweepControl.none(),
                 JournalFixtures.CLOCK));
-        assertEquals("the sim rig of journal " + file + " has no option 'port'; its options are scenario, seed",
+        assertEquals("the sim rig of journal " + file + " has no option 'port'; its options are scenario, seed, tensionN",
                 unknown.getMessage());
         RigException other = assertThrows(RigException.class, () -> JournaledSweep.resume(DRIVERS, file,
                 Map.of("seed", "3"), n -> { }, SweepEventListener.NONE, SweepControl.none(), JournalFixtures.CLOCK));

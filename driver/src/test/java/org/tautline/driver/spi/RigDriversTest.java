@@ -77,14 +77,14 @@ class RigDriversTest {
     @Test
     void optionsAreCheckedWithTheDriverAndOptionNamed() {
         RigDriver sim = RigDrivers.load(List.of()).find("sim");
-        assertEquals("rig driver 'sim' has no option 'port'; its options are: scenario, seed",
+        assertEquals("rig driver 'sim' has no option 'port'; its options are: scenario, seed, tensionN",
                 assertThrows(RigException.class, () -> sim.open(Map.of("port", "/dev/ttyUSB0"))).getMessage());
         assertEquals("rig driver 'sim': option 'seed' must be a whole number, got 'abc'",
                 assertThrows(RigException.class, () -> sim.open(Map.of("seed", "abc"))).getMessage());
         assertEquals("rig driver 'sim': option 'scenario' must be one of demo-wire, demo-wire-midspan, demo-wire-clean,"
                 + " got 'violin'", assertThrows(RigException.class, () -> sim.open(Map.of("scenario", "violin"))).getMessage());
         Map<String, String> complete = RigOptionValues.of(sim, Map.of("seed", "7")).asMap();
-        assertEquals(Map.of("scenario", "demo-wire", "seed", "7"), complete, "defaults are filled in");
+        assertEquals(Map.of("scenario", "demo-wire", "seed", "7", "tensionN", "none"), complete, "defaults are filled in");
         try (Rig rig = sim.open(Map.of("seed", "7"))) {
             assertTrue(rig.identity().endsWith("seed 7"), rig.identity());
         }

@@ -21,8 +21,8 @@ import org.tautline.analysis.frf.FrfQuantity;
  *
  * <p>Its phase falls by 180 degrees through the mode, fastest at w_r where d(phase)/df = -1/(zeta f_r); it has fallen
  * by 10 % (18 degrees) where (f_r - f)/(zeta f_r) = 1/tan(18 deg) = 3.078 and by 90 % at the mirror point [derived
- * from the formula]. The mode is the demo wire's fundamental, 228.23 Hz at zeta 0.35 %, on the 35 coarse steps of
- * the example plan (150-800 Hz), which fall 222.41 and 233.63 Hz either side of it.
+ * from the formula]. The mode is one like the demo wire's fundamental (the wire at 150 N), 228.23 Hz at zeta 0.35 %,
+ * on the 35 coarse steps of the example plan (150-800 Hz), which fall 222.41 and 233.63 Hz either side of it.
  */
 class PhaseSearchTest {
     private static final double FR_HZ = 228.23;

@@ -14,7 +14,7 @@ import org.tautline.driver.RigException;
 import org.tautline.driver.sim.SimulatedRig;
 
 /**
- * Safety limits, cancel and the way the drive is brought down, on the simulated wire around its first mode (228 Hz).
+ * Safety limits, cancel and the way the drive is brought down, on the simulated wire around its first mode (226 Hz).
  *
  * <p>What is checked is the engine's own contract, against the rig's recorded commands and blocks: a
  * limit trips on the first block that reaches it (no block is read after it), the drive then ramps to
