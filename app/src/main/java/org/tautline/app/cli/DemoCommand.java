@@ -6,7 +6,11 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.LinkedHashMap;
 import java.util.Map;
+import java.util.OptionalDouble;
+import java.util.OptionalLong;
 import java.util.concurrent.Callable;
+
+import com.fasterxml.jackson.databind.node.ObjectNode;
 
 import org.tautline.analysis.frf.FrfCsvWriter;
 import org.tautline.app.SafetyNotice;
@@ -15,6 +19,9 @@ import org.tautline.app.qualify.DemoRun;
 import org.tautline.app.qualify.DemoScenario;
 import org.tautline.app.qualify.ResultText;
 import org.tautline.app.qualify.SweepStoppedException;
+import org.tautline.driver.sim.SimulationConfig;
+import org.tautline.driver.sim.SimulationConfigs;
+import org.tautline.driver.sweep.SweepEventListener;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
@@ -51,14 +58,31 @@ final class DemoCommand implements Callable<Integer> {
     @Option(names = "--no-progress", description = "Do not draw the progress bar.")
     private boolean noProgress;
 
+    @Option(names = "--seed", paramLabel = "N", description = "Qualify one specimen of the demo wire's invented lot"
+            + " instead of the wire as built: N (0 or more) draws its tension, mass per length, bending stiffness and"
+            + " damping with the lot's spread and seeds the sensor noise; the same N gives the same specimen and"
+            + " samples, and the stated specimen is DEMO-TW-S followed by N in four digits (DEMO-TW-S0007).")
+    private Long seed;
+
+    @Option(names = "--tension-n", paramLabel = "T", description = "Give the simulated wire this true tension in N,"
+            + " from " + (int) SimulationConfigs.DEMO_MIN_TENSION_N + " to " + (int) SimulationConfigs.DEMO_MAX_TENSION_N
+            + " (a marginal or failing specimen on purpose); the stated nominal tension stays 150 N.")
+    private Double tensionN;
+
     @Override
     public Integer call() throws IOException {
         PrintWriter out = spec.commandLine().getOut();
+        if (outDir == null && lot != null) {
+            throw new IllegalArgumentException("--lot needs --out DIR: the register keeps where the run's files are");
+        }
+        OptionalLong specimenSeed = seedOption();
+        SimulationConfig simulation = DemoScenario.simulation(specimenSeed, tensionOption());
         System.err.print(SafetyNotice.asText(true));
         System.err.flush();
         DemoOutcome outcome;
         try (SignalStop stop = new SignalStop()) {
-            outcome = DemoRun.run(SweepCommand.progress(noProgress), stop.control());
+            outcome = DemoRun.run(simulation, DemoScenario.specimen(specimenSeed), DemoScenario.plan(),
+                    DemoScenario.specification(), progress(), stop.control());
         } catch (SweepStoppedException e) {
             System.err.println("tautline: " + e.getMessage());
             return switch (e.sweep().status()) {
@@ -67,32 +91,62 @@ final class DemoCommand implements Callable<Integer> {
                 default -> ExitCodes.SWEEP_STOPPED;
             };
         }
-        if (json) {
-            out.println(ResultJson.MAPPER.writeValueAsString(ResultJson.outcome(outcome)));
+        String simulated = DemoRecords.simulatedSpecimen(specimenSeed, tensionOption());
+        ObjectNode json = DemoRecords.withSeed(ResultJson.outcome(outcome), specimenSeed);
+        if (this.json) {
+            out.println(ResultJson.MAPPER.writeValueAsString(json));
         } else {
+            out.println("Simulated: " + simulated);
             out.print(ResultText.format(outcome));
         }
         out.flush();
         if (outDir != null) {
-            write(outcome, outDir);
+            write(outcome, json, simulated, outDir);
             System.err.println("tautline: wrote frf.csv, truth.json, result.json, specimen.json and spec.json to " + outDir);
             DemoRecords.write(outDir, lot, register, operator);
-        } else if (lot != null) {
-            throw new org.tautline.analysis.AnalysisException("--lot needs --out DIR: the register keeps where the run's files are");
         }
         return ExitCodes.of(outcome.result().verdict());
     }
 
-    private static void write(DemoOutcome outcome, Path dir) throws IOException {
+    private SweepEventListener progress() {
+        return SweepCommand.progress(noProgress);
+    }
+
+    private OptionalLong seedOption() {
+        if (seed == null) {
+            return OptionalLong.empty();
+        }
+        if (seed < 0 || seed > Integer.MAX_VALUE) {
+            throw new IllegalArgumentException("--seed must be a whole number from 0 to " + Integer.MAX_VALUE + ", got "
+                    + seed);
+        }
+        return OptionalLong.of(seed);
+    }
+
+    private OptionalDouble tensionOption() {
+        if (tensionN == null) {
+            return OptionalDouble.empty();
+        }
+        if (!(tensionN >= SimulationConfigs.DEMO_MIN_TENSION_N && tensionN <= SimulationConfigs.DEMO_MAX_TENSION_N)) {
+            throw new IllegalArgumentException("--tension-n must lie between " + (int) SimulationConfigs.DEMO_MIN_TENSION_N
+                    + " and " + (int) SimulationConfigs.DEMO_MAX_TENSION_N + " N (the simulated demo wire's range), got "
+                    + tensionN + " N");
+        }
+        return OptionalDouble.of(tensionN);
+    }
+
+    private static void write(DemoOutcome outcome, ObjectNode json, String simulated, Path dir) throws IOException {
         Files.createDirectories(dir);
         Map<String, String> metadata = new LinkedHashMap<>();
         metadata.put("specimen", outcome.result().specimen().id());
         metadata.put("source", "Tautline demo on the simulated rig (invented specimen)");
-        metadata.putAll(DemoRecords.rigMetadata());
+        metadata.put("simulated specimen", simulated);
+        metadata.putAll(DemoRecords.rigMetadata(outcome.truth().config()));
         FrfCsvWriter.write(outcome.result().receptance(), metadata, dir.resolve("frf.csv"));
-        ResultJson.MAPPER.writeValue(dir.resolve("truth.json").toFile(), ResultJson.truth(outcome.truth()));
-        ResultJson.MAPPER.writeValue(dir.resolve("result.json").toFile(), ResultJson.outcome(outcome));
-        ResultJson.MAPPER.writeValue(dir.resolve("specimen.json").toFile(), ResultJson.specimenFile(DemoScenario.specimen()));
+        ResultJson.MAPPER.writeValue(dir.resolve("truth.json").toFile(), json.get("truth"));
+        ResultJson.MAPPER.writeValue(dir.resolve("result.json").toFile(), json);
+        ResultJson.MAPPER.writeValue(dir.resolve("specimen.json").toFile(),
+                ResultJson.specimenFile(outcome.result().specimen()));
         ResultJson.MAPPER.writeValue(dir.resolve("spec.json").toFile(),
                 ResultJson.specificationFile(DemoScenario.specification()));
     }

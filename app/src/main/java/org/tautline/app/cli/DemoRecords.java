@@ -7,6 +7,10 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.OptionalDouble;
+import java.util.OptionalLong;
+
+import com.fasterxml.jackson.databind.node.ObjectNode;
 
 import org.tautline.app.lot.FigureStatistics;
 import org.tautline.app.lot.LotEntries;
@@ -26,9 +30,41 @@ final class DemoRecords {
     private DemoRecords() {
     }
 
-    /** @return rig, sensors, calibration and plan of the demo as FRF file metadata */
-    static Map<String, String> rigMetadata() {
-        SimulationConfig sim = DemoScenario.simulation();
+    /**
+     * @param seed the demo's seed, when one was given
+     * @param tensionN the true tension it was given, when one was given
+     * @return which simulated specimen the demo qualifies, for people
+     */
+    static String simulatedSpecimen(OptionalLong seed, OptionalDouble tensionN) {
+        String which = seed.isPresent() ? "specimen " + seed.getAsLong() + " of the demo wire's invented lot (seed "
+                + seed.getAsLong() + ")" : "the demo wire as built (no seed)";
+        return which + (tensionN.isPresent() ? String.format(Locale.ROOT, ", given a true tension of %s N",
+                fmt(tensionN.getAsDouble())) : "");
+    }
+
+    /**
+     * Adds the seed to the simulated truth of the demo's JSON, {@code truth.specimen.seed}: the number, or null for the
+     * demo wire as built.
+     *
+     * @param outcome the demo's JSON
+     * @param seed the seed, when one was given
+     * @return the same node
+     */
+    static ObjectNode withSeed(ObjectNode outcome, OptionalLong seed) {
+        ObjectNode specimen = (ObjectNode) outcome.get("truth").get("specimen");
+        if (seed.isPresent()) {
+            specimen.put("seed", seed.getAsLong());
+        } else {
+            specimen.putNull("seed");
+        }
+        return outcome;
+    }
+
+    /**
+     * @param sim the simulated rig the demo ran on
+     * @return rig, sensors, calibration and plan of the demo as FRF file metadata
+     */
+    static Map<String, String> rigMetadata(SimulationConfig sim) {
         ShakerModel shaker = sim.shaker();
         SensorSetup sensors = sim.sensors();
         SweepPlan plan = DemoScenario.plan();

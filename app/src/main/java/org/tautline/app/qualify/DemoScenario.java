@@ -1,7 +1,10 @@
 package org.tautline.app.qualify;
 
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.OptionalLong;
 
 import org.tautline.analysis.specimen.EndCondition;
 import org.tautline.analysis.specimen.Specimen;
@@ -21,13 +24,34 @@ public final class DemoScenario {
     private DemoScenario() {
     }
 
-    /** The tension the demo wire really has in the simulation, N: a little below its nominal 150 N. */
-    public static final double TRUE_TENSION_N = 146.5;
+    /**
+     * The tension the demo wire really has in the simulation, N: a little below its nominal 150 N
+     * ({@link SimulationConfigs#DEMO_TENSION_N}, the same wire the {@code sim} rig simulates by default).
+     */
+    public static final double TRUE_TENSION_N = SimulationConfigs.DEMO_TENSION_N;
 
-    /** @return the simulated rig's configuration: the wire as it really is, slacker than stated */
+    /** The stated specimen's id for the demo wire as built. */
+    public static final String ID = "DEMO-TW-0042";
+
+    /**
+     * @return the simulated rig's configuration: the wire as it really is, slacker than stated; the {@code sim} rig's
+     *     default ({@link SimulationConfigs#demoWire()})
+     */
     public static SimulationConfig simulation() {
-        SimulationConfig demo = SimulationConfigs.demoWire();
-        return demo.withSpecimen(demo.specimen().withTensionN(TRUE_TENSION_N));
+        return SimulationConfigs.demoWire();
+    }
+
+    /**
+     * The demo wire as built or one specimen of its invented lot, at its own true tension or at a chosen one; the same
+     * specimen the {@code sim} rig opens with the options {@code seed} and {@code tensionN}.
+     *
+     * @param seed empty for the wire as built (noise seed 1), or the seed of one specimen of its lot
+     * @param tensionN empty for the specimen's own true tension, or the tension to give it, N
+     * @return the simulated rig's configuration
+     * @see SimulationConfigs#demoWire(OptionalLong, OptionalDouble)
+     */
+    public static SimulationConfig simulation(OptionalLong seed, OptionalDouble tensionN) {
+        return SimulationConfigs.demoWire(seed, tensionN);
     }
 
     /** A line for people: what the demo specimen is. */
@@ -42,7 +66,22 @@ public final class DemoScenario {
      * @return the stated specimen
      */
     public static Specimen specimen() {
-        return new Specimen("DEMO-TW-0042", 0.60, 2.0e-3, 0.02e-3, 6.14e-4, 0.614e-4, EndCondition.PINNED, 0.07, 0.43,
+        return specimen(ID);
+    }
+
+    /**
+     * What the technician states about one specimen of the demo wire's lot: the same nominal values under the
+     * specimen's own id.
+     *
+     * @param seed empty for the wire as built, or the seed of one specimen of its lot
+     * @return the stated specimen: {@value #ID}, or {@code DEMO-TW-S} and the seed, for example {@code DEMO-TW-S0007}
+     */
+    public static Specimen specimen(OptionalLong seed) {
+        return specimen(seed.isPresent() ? String.format(Locale.ROOT, "DEMO-TW-S%04d", seed.getAsLong()) : ID);
+    }
+
+    private static Specimen specimen(String id) {
+        return new Specimen(id, 0.60, 2.0e-3, 0.02e-3, 6.14e-4, 0.614e-4, EndCondition.PINNED, 0.07, 0.43,
                 150.0, 0.0, 0.0, 39000.0, Optional.empty());
     }
 
@@ -69,8 +108,10 @@ public final class DemoScenario {
      * <p>The safety limits leave room for the level check at three times the drive ({@link LevelCheck}):
      * the drive never above 5 V, the force below 2 N (the demo's largest is about 0.3 N, off resonance), the
      * response below 1.8 mm, 90 % of the displacement sensor's 2 mm full scale, and the wire's motion at the sensor
-     * below 1.5 mm (the fundamental moves it about 41 micrometres per volt; the largest motion of the sweep, about
-     * 1 mm at 1 V, is near 262 Hz, where the shaker's moving mass on its stinger resonates with the wire).
+     * below 1.5 mm (the fundamental doublet moves it about 44 micrometres per volt; the largest motion of the sweep,
+     * about 1.1 mm at 1 V, is near 259 Hz, where the shaker's moving mass on its stinger resonates with the wire; it
+     * goes as the inverse of the wire's damping, which is why the lot's damping spread is small, see
+     * {@link org.tautline.driver.sim.DemoWireLot}).
      *
      * @return the plan
      */
