@@ -150,6 +150,11 @@ final class SweepCommand implements Callable<Integer> {
             SweepResult result = JournaledSweep.run(drivers, driver, given, plan, journal, keepSamples,
                     progress(noProgress), stop.control(), Clock.systemUTC());
             return SweepReport.finish(result, runDir, json, spec.commandLine().getOut(), err);
+        } catch (RuntimeException e) {
+            if (!Files.exists(journal)) {
+                Files.deleteIfExists(runDir.resolve(SetupFile.NAME)); // no run was made: the folder can be used again
+            }
+            throw e;
         }
     }
 
