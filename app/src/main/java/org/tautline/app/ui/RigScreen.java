@@ -15,6 +15,7 @@ import javax.swing.SwingWorker;
 
 import com.fazecast.jSerialComm.SerialPort;
 import net.miginfocom.swing.MigLayout;
+import org.tautline.app.ui.run.OptionLabel;
 import org.tautline.driver.spi.RigDriver;
 import org.tautline.driver.spi.RigDrivers;
 import org.tautline.driver.spi.RigOption;
@@ -33,6 +34,10 @@ final class RigScreen {
     private final JButton disconnect = new JButton("Disconnect");
     private final JTextArea identity = new JTextArea(6, 80);
     private final RigDrivers drivers;
+    /** What the rig screen says before a rig is connected: what to do next. */
+    static final String NOT_CONNECTED = "No rig connected. Choose a driver and press Connect: \"sim\" is the simulated"
+            + " rig, which needs no hardware; \"serial\" talks to a rig on a serial port. Then run the sweep on the Run"
+            + " screen (Alt+3).";
 
     RigScreen(RigDrivers drivers, Runnable onConnect, Runnable onDisconnect) {
         this.drivers = drivers;
@@ -53,7 +58,7 @@ final class RigScreen {
         identity.setName("rigIdentity");
         identity.setLineWrap(true);
         identity.setWrapStyleWord(true);
-        identity.setText("Not connected. The simulated rig needs no hardware.");
+        identity.setText(NOT_CONNECTED);
 
         JLabel title = new JLabel("Rig");
         title.putClientProperty("FlatLaf.styleClass", "h3");
@@ -113,16 +118,19 @@ final class RigScreen {
             JComboBox<String> box = new JComboBox<>();
             box.setEditable(true);
             box.setName("option." + o.name());
-            box.getEditor().setItem(o.isRequired() ? "" : o.defaultValue());
+            // The default as the selected item (not only the editor's text), so that a change of look keeps it.
+            if (!o.isRequired()) {
+                box.addItem(o.defaultValue());
+                box.setSelectedItem(o.defaultValue());
+            }
             if (o.name().equals("port")) {
                 listPorts(box);
             }
-            JLabel label = new JLabel(o.name() + (o.isRequired() ? " (required)" : ""));
+            JLabel label = new JLabel(OptionLabel.of(o) + (o.isRequired() ? ", required" : ""));
             label.setLabelFor(box);
             optionPanel.add(label);
             optionPanel.add(box, "growx");
-            optionPanel.add(new JLabel("<html>" + o.description() + (o.unit().isEmpty() ? "" : " (" + o.unit() + ")")
-                    + "</html>"), "wmax 520");
+            optionPanel.add(new JLabel("<html>" + o.description() + "</html>"), "wmax 520");
             optionEditors.put(o.name(), box);
         }
         panel.revalidate();

@@ -1,13 +1,16 @@
 package org.tautline.app.ui;
 
 import java.awt.Color;
+import java.awt.Component;
 import java.util.LinkedHashMap;
 import java.util.Map;
 
+import javax.swing.DefaultListCellRenderer;
 import javax.swing.JButton;
 import javax.swing.JComboBox;
 import javax.swing.JComponent;
 import javax.swing.JLabel;
+import javax.swing.JList;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.JTextField;
@@ -17,7 +20,9 @@ import javax.swing.event.DocumentListener;
 import javax.swing.text.JTextComponent;
 
 import net.miginfocom.swing.MigLayout;
+import org.tautline.app.ui.setup.ChoiceLabels;
 import org.tautline.app.ui.setup.MaterialPreset;
+import org.tautline.app.ui.setup.RigTimeEstimate;
 import org.tautline.app.ui.setup.SetupField;
 import org.tautline.app.ui.setup.SetupForm;
 
@@ -31,6 +36,7 @@ final class SetupScreen {
     private final Map<String, JLabel> messages = new LinkedHashMap<>();
     private final Runnable onEdit;
     private final JLabel lockNote = new JLabel();
+    private final JLabel rigTime = new JLabel();
     private SetupForm form;
     private boolean filling;
     private boolean locked;
@@ -39,10 +45,10 @@ final class SetupScreen {
     SetupScreen(SetupForm form, Runnable onEdit) {
         this.form = form;
         this.onEdit = onEdit;
-        JPanel left = new JPanel(new MigLayout("insets 0, wrap 1, gapy 12"));
+        JPanel left = new JPanel(new MigLayout("insets 0, wrap 1, gapy 8"));
         left.add(section(SetupField.Section.SPECIMEN));
         left.add(section(SetupField.Section.SENSORS));
-        JPanel right = new JPanel(new MigLayout("insets 0, wrap 1, gapy 12"));
+        JPanel right = new JPanel(new MigLayout("insets 0, wrap 1, gapy 8"));
         right.add(section(SetupField.Section.PLAN));
         right.add(section(SetupField.Section.SAFETY));
         right.add(limitsSection());
@@ -120,6 +126,10 @@ final class SetupScreen {
         p.add(title, "span 3, left, gapbottom 6");
         if (section == SetupField.Section.SPECIMEN) {
             addMaterialPreset(p);
+        }
+        if (section == SetupField.Section.PLAN) {
+            rigTime.setName("rigTime");
+            p.add(rigTime, "span 3, wmax 660, gapbottom 4");
         }
         for (SetupField f : form.fields()) {
             if (f.section() != section) {
@@ -214,6 +224,17 @@ final class SetupScreen {
         JComponent editor;
         if (f.kind() == SetupField.Kind.CHOICE) {
             JComboBox<String> box = new JComboBox<>(f.choices().toArray(new String[0]));
+            // The project keeps the value (PINNED); people see its label (pinned).
+            box.setRenderer(new DefaultListCellRenderer() {
+                private static final long serialVersionUID = 1L;
+
+                @Override
+                public Component getListCellRendererComponent(JList<?> list, Object value, int index, boolean selected,
+                                                              boolean focus) {
+                    return super.getListCellRendererComponent(list, ChoiceLabels.of(f.key(), (String) value), index,
+                            selected, focus);
+                }
+            });
             box.setSelectedItem(form.value(f.key()));
             box.addActionListener(e -> edited(f.key(), (String) box.getSelectedItem()));
             editor = box;
@@ -264,6 +285,8 @@ final class SetupScreen {
                 editor.putClientProperty("JComponent.outline", problem == null ? null : "error");
             }
         });
+        rigTime.setText(problems.isEmpty() ? "<html>" + escape(RigTimeEstimate.of(form.plan(), form.specimen()).text())
+                + "</html>" : "<html>Rig time: shown once the fields marked in red are right.</html>");
         panel.revalidate();
         return problems.isEmpty();
     }

@@ -15,7 +15,8 @@ final class FieldCheck {
                 return t.isEmpty() ? Optional.of("must not be empty; expected " + expected) : Optional.empty();
             case CHOICE:
                 return field.choices().contains(t) ? Optional.empty()
-                        : Optional.of("got '" + t + "'; expected one of " + String.join(", ", field.choices()));
+                        : Optional.of("got '" + t + "'; expected one of " + String.join(", ", field.choices().stream()
+                                .map(c -> ChoiceLabels.of(field.key(), c)).toList()));
             case OPTIONAL_NUMBER:
                 if (t.isEmpty()) {
                     return Optional.empty();

@@ -19,6 +19,7 @@ import java.util.Map;
 
 import org.tautline.analysis.specimen.EndCondition;
 import org.tautline.analysis.specimen.Specimen;
+import org.tautline.analysis.verdict.Figure;
 import org.tautline.analysis.verdict.Limit;
 import org.tautline.analysis.verdict.Specification;
 import org.tautline.driver.sweep.SweepPlan;
@@ -63,8 +64,9 @@ final class SetupFields {
         f.add(SetupField.of("safety.displacementM", SAFETY, "Stop when the specimen moves", "m", POSITIVE));
         for (Limit l : limits) {
             String label = Character.toUpperCase(l.name().charAt(0)) + l.name().substring(1);
-            f.add(SetupField.of(lowerKey(l), LIMITS, label + ": at least", l.unit(), OPTIONAL_NUMBER));
-            f.add(SetupField.of(upperKey(l), LIMITS, label + ": at most", l.unit(), OPTIONAL_NUMBER));
+            String unit = l.unit().isBlank() ? "" : Figure.unitLabel(l.unit());
+            f.add(SetupField.of(lowerKey(l), LIMITS, label + ": at least", unit, OPTIONAL_NUMBER));
+            f.add(SetupField.of(upperKey(l), LIMITS, label + ": at most", unit, OPTIONAL_NUMBER));
         }
         return f;
     }

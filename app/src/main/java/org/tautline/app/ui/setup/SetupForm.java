@@ -117,7 +117,8 @@ public final class SetupForm {
             specification();
             recordingCalibrations();
         } catch (AnalysisException | RigException e) {
-            problems.put(fieldNamedIn(e.getMessage()), e.getMessage());
+            String message = FieldWords.withFormKeys(e.getMessage());
+            problems.put(fieldNamedIn(message), FieldWords.inWords(message, fields));
         }
         return problems;
     }
