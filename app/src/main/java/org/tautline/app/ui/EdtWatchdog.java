@@ -3,24 +3,19 @@ package org.tautline.app.ui;
 import java.awt.EventQueue;
 
 /**
- * Measures how responsive the Swing event thread is: a daemon thread posts a probe every
- * {@code periodMs} milliseconds and records the longest wait between posting and running.
+ * Measures how responsive the Swing event thread is: a daemon thread posts a probe every {@code periodMs}
+ * milliseconds and records, in an {@link EventThreadDelays}, the wait between posting and running.
  *
- * <p>Two figures are kept. {@link #longestDelayMs()} is every delay as measured. {@link #longestStallMs()}
- * counts a delay only when the event thread itself was found busy: three periods after posting, the
- * watchdog sees the probe still waiting and records what the event thread is doing. When the watchdog
- * itself woke for that look later than half the delay (a pause of the whole JVM, or a machine too busy
- * to schedule it), the delay is not the event thread's doing and counts only in the first figure.
+ * <p>Three periods after posting, a probe still waiting is looked at: the watchdog records what the event thread is
+ * doing, and how late it made that look itself, which tells a busy event thread from a busy machine (see
+ * {@link EventThreadDelays}). For benchmarks, which print the figures; no test asserts a time with it.
  */
 public final class EdtWatchdog implements AutoCloseable {
     private final long periodMs;
     private final Thread thread;
+    private final EventThreadDelays delays = new EventThreadDelays();
     private volatile boolean running = true;
     private volatile Thread eventThread;
-    private volatile long longestDelayNs;
-    private volatile long longestStallNs;
-    private volatile long probes;
-    private volatile String stackAtLongest = "";
 
     /** @param periodMs time between probes, milliseconds, 1 or more */
     public EdtWatchdog(long periodMs) {
@@ -61,7 +56,8 @@ public final class EdtWatchdog implements AutoCloseable {
                 lock.notifyAll();
             }
         });
-        long checkNs = 3 * periodMs * 1_000_000L;
+        long periodNs = periodMs * 1_000_000L;
+        long checkNs = 3 * periodNs;
         String stack = "";
         long lateNs = -1;
         synchronized (lock) {
@@ -73,43 +69,40 @@ public final class EdtWatchdog implements AutoCloseable {
                 lateNs = System.nanoTime() - deadline;
                 Thread edt = eventThread;
                 stack = edt == null ? "" : stackOf(edt);
+                delays.seenBusy(stack);
             }
             while (ranAt[0] == 0 && running) {
                 lock.wait(periodMs);
             }
         }
-        if (ranAt[0] == 0) {
-            return;
+        if (ranAt[0] != 0) {
+            delays.record(ranAt[0] - posted, lateNs, periodNs, stack);
         }
-        long delay = ranAt[0] - posted;
-        // The watchdog, woken late by less than half the delay, saw the probe waiting: the event thread's doing.
-        boolean attributable = lateNs < Math.max(periodMs * 1_000_000L, delay / 2);
-        probes++;
-        longestDelayNs = Math.max(longestDelayNs, delay);
-        if (attributable && delay > longestStallNs) {
-            longestStallNs = delay;
-            stackAtLongest = stack;
-        }
+    }
+
+    /** @return the tally so far */
+    public EventThreadDelays delays() {
+        return delays;
     }
 
     /** @return the longest delay seen between posting a probe and the event thread running it, milliseconds */
     public double longestDelayMs() {
-        return longestDelayNs / 1e6;
+        return delays.longestDelayMs();
     }
 
     /** @return the longest delay while the event thread was found busy, milliseconds (see the class comment) */
     public double longestStallMs() {
-        return longestStallNs / 1e6;
+        return delays.longestStallMs();
     }
 
     /** @return what the event thread was doing during the longest stall, when it was over three periods */
     public String stackAtLongestStall() {
-        return stackAtLongest;
+        return delays.stackAtLongestStall();
     }
 
     /** @return probes that have run */
     public long probeCount() {
-        return probes;
+        return delays.probes();
     }
 
     private static String stackOf(Thread thread) {
