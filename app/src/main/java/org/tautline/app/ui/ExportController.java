@@ -33,9 +33,14 @@ final class ExportController {
         this.parts = parts;
     }
 
-    /** @param result the result now on the results screen */
+    /** @param result the result now on the results screen, current */
     void resultShown(QualificationResult result) {
         shown = Optional.of(result);
+    }
+
+    /** The result on show is no longer current (a new run started, or one ended without a result): nothing to export. */
+    void resultWithdrawn() {
+        shown = Optional.empty();
     }
 
     /** Asks for the operator's name and a PDF file, then writes the qualification report there. */
@@ -98,7 +103,8 @@ final class ExportController {
     }
 
     private void nothingYet() {
-        JOptionPane.showMessageDialog(parts.frame(), "There is no result to export yet: run a sweep or import an FRF first.",
+        JOptionPane.showMessageDialog(parts.frame(), "There is no current result to export: the results screen shows"
+                + " none, or one marked \"not current\". Run a sweep to its end, or import an FRF, first.",
                 "Tautline", JOptionPane.INFORMATION_MESSAGE);
     }
 

@@ -84,6 +84,7 @@ final class FileController {
             return;
         }
         parts.setup().show(SetupForm.demo());
+        parts.noResult("A new project was started.");
         current = null;
         lastResult = Optional.empty();
         loadedFrf = Optional.empty();
@@ -120,6 +121,7 @@ final class FileController {
                     Project project = get();
                     SetupForm form = ProjectFiles.formOf(project, file);
                     parts.setup().show(form);
+                    parts.noResult("The project " + file.getFileName() + " was opened.");
                     current = file;
                     lastResult = Optional.empty();
                     loadedFrf = project.measuredFrf();
@@ -128,7 +130,7 @@ final class FileController {
                     remember(file);
                     parts.status().message("Opened " + file);
                     if (loadedFrf.isPresent() && parts.setup().validate()) {
-                        runs.analyse(loadedFrf.get().toFrf(), form, "the FRF saved in " + file.getFileName());
+                        runs.analyse(loadedFrf.get().toFrf(), form, "the project " + file.getFileName());
                     }
                 } catch (InterruptedException e) {
                     Thread.currentThread().interrupt();

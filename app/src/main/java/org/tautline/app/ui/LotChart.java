@@ -3,7 +3,8 @@ package org.tautline.app.ui;
 import java.awt.BasicStroke;
 import java.awt.Color;
 
-import org.jfree.chart.ChartPanel;
+import javax.swing.JComponent;
+
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.plot.ValueMarker;
@@ -15,6 +16,8 @@ import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 import org.tautline.analysis.verdict.Figure;
 import org.tautline.app.lot.FigureStatistics;
+import org.tautline.app.ui.chart.ChartStyle;
+import org.tautline.app.ui.chart.ChartView;
 
 /**
  * The individuals control chart of one figure of a lot: the values in register order, the centre line,
@@ -25,7 +28,7 @@ final class LotChart {
     private final XYSeriesCollection data = new XYSeriesCollection();
     private final XYPlot plot;
     private final JFreeChart chart;
-    private final ChartPanel panel;
+    private final ChartView view;
 
     LotChart() {
         NumberAxis qualification = new NumberAxis("Qualification in register order");
@@ -37,13 +40,15 @@ final class LotChart {
         r.setSeriesPaint(1, Palette.FAIL);
         r.setSeriesLinesVisible(1, false);
         plot = new XYPlot(data, qualification, value, r);
-        chart = new JFreeChart("Control chart", JFreeChart.DEFAULT_TITLE_FONT, plot, true);
-        panel = ChartStyle.panel(chart);
-        panel.setName("lotChart");
+        chart = new JFreeChart("Control chart", ChartStyle.titleFont(), plot, true);
+        view = new ChartView(chart, null);
+        view.chartPanel().setName("lotChart");
+        view.emptyMessage("No lot shown: name a register and a lot above, then Show lot (or add the result on show)");
     }
 
-    ChartPanel panel() {
-        return panel;
+    /** @return the chart with its "Show whole range" button, to place in the lot screen */
+    JComponent panel() {
+        return view.component();
     }
 
     /** @param f the figure to chart; call on the event thread */

@@ -21,16 +21,12 @@ public final class Palette {
     public static final Color AGREEING = MEASURED;
     /** Poles that agree with nothing in the order below: grey. */
     public static final Color LONE = new Color(0x99, 0x99, 0x99);
-    /** Chosen poles: black. */
-    public static final Color CHOSEN = Color.BLACK;
     /** Pass. */
     public static final Color PASS = SECOND;
     /** Fail. */
     public static final Color FAIL = FIT;
     /** Not determinable. */
     public static final Color UNDETERMINED = FREQUENCY_ONLY;
-    /** Grid lines. */
-    public static final Color GRID = new Color(0xDD, 0xDD, 0xDD);
 
     private Palette() {
     }

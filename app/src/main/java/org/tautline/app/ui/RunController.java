@@ -3,7 +3,7 @@ package org.tautline.app.ui;
 import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.ExecutionException;
-import java.util.function.Consumer;
+import java.time.Instant;
 
 import javax.swing.JOptionPane;
 import javax.swing.SwingWorker;
@@ -16,6 +16,7 @@ import org.tautline.app.SafetyNotice;
 import org.tautline.app.qualify.LevelCheck;
 import org.tautline.app.qualify.Qualification;
 import org.tautline.app.qualify.QualificationResult;
+import org.tautline.app.ui.results.ResultOrigin;
 import org.tautline.app.ui.run.ProgressText;
 import org.tautline.app.ui.run.RigConnection;
 import org.tautline.app.ui.run.SweepSession;
@@ -42,7 +43,7 @@ final class RunController {
     static final String START_CHOICE = "I have read the cautions: start";
     private final WorkbenchParts parts;
     private final RigDrivers drivers;
-    private final Consumer<QualificationResult> onResult;
+    private final ResultSink results;
     private final TraceBuffer traceBuffer = new TraceBuffer(600);
     private final Timer traceTimer;
     private TappedRig rig;
@@ -52,6 +53,21 @@ final class RunController {
     private boolean safetyAcknowledged;
     private final java.util.List<Double> pendingHz = new java.util.ArrayList<>();
     private final java.util.List<Double> pendingMagnitude = new java.util.ArrayList<>();
+    private final java.util.List<Double> pendingPhaseDeg = new java.util.ArrayList<>();
+    private String connectedDriver = "";
+    private Instant sweepStartedAt = Instant.EPOCH;
+
+    /** Where the results of runs and fits go, and word that the result on show is no longer current. */
+    interface ResultSink {
+        /**
+         * @param result a new result, current
+         * @param origin when and on which rig it was made
+         */
+        void show(QualificationResult result, ResultOrigin origin);
+
+        /** @param why what made the result on show not current, as a clause */
+        void withdraw(String why);
+    }
 
     /**
      * What a sweep analyses, taken from the setup form on the event thread when Start is pressed: edits made during
@@ -60,10 +76,10 @@ final class RunController {
     private record Snapshot(SweepPlan plan, Specimen specimen, Specification specification) {
     }
 
-    RunController(WorkbenchParts parts, RigDrivers drivers, Consumer<QualificationResult> onResult) {
+    RunController(WorkbenchParts parts, RigDrivers drivers, ResultSink results) {
         this.parts = parts;
         this.drivers = drivers;
-        this.onResult = onResult;
+        this.results = results;
         // Redraw the live charts four times a second rather than on every block or step: each redraw paints
         // the whole chart, and the event thread must stay free for the stop control.
         this.traceTimer = new Timer(250, e -> redrawLive());
@@ -74,9 +90,9 @@ final class RunController {
         if (!pendingHz.isEmpty()) {
             double[] f = pendingHz.stream().mapToDouble(Double::doubleValue).toArray();
             double[] m = pendingMagnitude.stream().mapToDouble(Double::doubleValue).toArray();
-            pendingHz.clear();
-            pendingMagnitude.clear();
-            parts.run().frf().addMeasuredPoints(f, m);
+            double[] p = pendingPhaseDeg.stream().mapToDouble(Double::doubleValue).toArray();
+            clearPending();
+            parts.run().frf().addMeasuredPoints(f, m, p);
         }
     }
 
@@ -103,13 +119,15 @@ final class RunController {
                 parts.status().progress(0, "idle");
                 try {
                     rig = get();
+                    connectedDriver = driver;
                     parts.rig().connected(true, RigConnection.health(rig));
                     parts.status().rig("connected: " + driver + ", excitation off");
                     parts.status().message("Connected to " + rig.identity());
                 } catch (InterruptedException e) {
                     Thread.currentThread().interrupt();
                 } catch (ExecutionException e) {
-                    parts.rig().connected(false, List.of("Could not connect: " + e.getCause().getMessage()));
+                    parts.rig().connected(false, List.of("Could not connect: " + e.getCause().getMessage(),
+                            "Check the settings above and press Connect again."));
                     parts.status().rig("not connected");
                     parts.status().message("Could not connect: " + e.getCause().getMessage());
                 }
@@ -129,7 +147,7 @@ final class RunController {
             // A paused or interrupted sweep is kept: reconnect (on another port if the rig moved) and Resume.
             session = null;
         }
-        parts.rig().connected(false, List.of("Not connected."));
+        parts.rig().connected(false, List.of(RigScreen.NOT_CONNECTED));
         parts.status().rig("not connected");
         updateButtons();
         if (closing != null) {
@@ -159,14 +177,15 @@ final class RunController {
         }
         snapshot = new Snapshot(form.plan(), form.specimen(), form.specification());
         session = new SweepSession(snapshot.plan());
+        sweepStartedAt = Instant.now();
+        results.withdraw(sweepWords() + " is running");
         parts.run().frf().clear();
         parts.run().frf().band(snapshot.plan().startHz(), snapshot.plan().stopHz());
         org.tautline.driver.spi.ChannelInfo response = rig.acquisition().channels().get(1);
-        parts.run().traces().responseLabel("Response, " + response.quantity() + " (" + response.unit() + ")");
+        parts.run().traces().response("Response, " + response.quantity(), response.unit());
         parts.run().traces().clear();
         traceBuffer.clear();
-        pendingHz.clear();
-        pendingMagnitude.clear();
+        clearPending();
         sweep(false);
     }
 
@@ -186,6 +205,7 @@ final class RunController {
             parts.status().message("Connect the rig first (on its new port if it moved), then press Resume.");
             return;
         }
+        results.withdraw(sweepWords() + " is running again");
         sweep(true);
     }
 
@@ -196,6 +216,7 @@ final class RunController {
         } else if (session != null) {
             session = null;
             parts.run().progress(0, "cancelled; the completed steps were dropped");
+            results.withdraw(sweepWords() + " was cancelled");
             updateButtons();
         }
     }
@@ -227,8 +248,7 @@ final class RunController {
     private void sweep(boolean resuming) {
         if (resuming) {
             // The kept steps are reported again as the engine takes them over: the live FRF is drawn anew from them.
-            pendingHz.clear();
-            pendingMagnitude.clear();
+            clearPending();
             parts.run().frf().clear();
             parts.run().frf().band(snapshot.plan().startHz(), snapshot.plan().stopHz());
         }
@@ -269,6 +289,7 @@ final class RunController {
                     if (e.completed()) {
                         pendingHz.add(e.frequencyHz());
                         pendingMagnitude.add(e.point().response().norm());
+                        pendingPhaseDeg.add(Math.toDegrees(e.point().response().getArgument()));
                         last = e;
                     }
                 }
@@ -295,17 +316,22 @@ final class RunController {
                     Optional<QualificationResult> result = get();
                     if (result.isPresent()) {
                         parts.run().progress(1, "sweep complete");
-                        onResult.accept(result.get());
+                        results.show(result.get(), ResultOrigin.sweep(sweepStartedAt, connectedDriver, sweepRig.identity()));
                     } else if (s.state() == SweepSession.State.PAUSED) {
-                        showKept(s.partial().orElseThrow());
+                        SweepResult partial = s.partial().orElseThrow();
+                        showKept(partial);
+                        results.withdraw(sweepWords() + " " + (partial.status() == SweepStatus.CANCELLED ? "is paused"
+                                : partial.status().label()) + " after " + partial.steps().size() + " steps");
                     } else {
                         parts.run().progress(0, "cancelled; the drive was ramped down and the steps were dropped");
+                        results.withdraw(sweepWords() + " was cancelled");
                     }
                 } catch (InterruptedException e) {
                     Thread.currentThread().interrupt();
                 } catch (ExecutionException e) {
                     parts.run().progress(0, "could not start");
                     parts.status().message("The sweep could not run; nothing was excited: " + e.getCause().getMessage());
+                    results.withdraw(sweepWords() + " could not run (" + e.getCause().getMessage() + ")");
                 }
                 updateButtons();
             }
@@ -333,6 +359,7 @@ final class RunController {
     /** Fits an FRF that came from a file, off the event thread. */
     void analyse(Frf frf, SetupForm form, String source) {
         parts.status().progress(-1, "fitting " + source);
+        results.withdraw("fitting " + source);
         new SwingWorker<QualificationResult, Void>() {
             @Override
             protected QualificationResult doInBackground() {
@@ -344,15 +371,27 @@ final class RunController {
             protected void done() {
                 parts.status().progress(0, "idle");
                 try {
-                    onResult.accept(get());
+                    results.show(get(), ResultOrigin.file(Instant.now(), source));
                     parts.status().message("Fitted " + source);
                 } catch (InterruptedException e) {
                     Thread.currentThread().interrupt();
                 } catch (ExecutionException e) {
                     parts.status().message("Could not fit " + source + ": " + e.getCause().getMessage());
+                    results.withdraw(source + " could not be fitted (" + e.getCause().getMessage() + ")");
                 }
             }
         }.execute();
+    }
+
+    private void clearPending() {
+        pendingHz.clear();
+        pendingMagnitude.clear();
+        pendingPhaseDeg.clear();
+    }
+
+    /** @return the sweep in words, for the results screen, for example "the sweep started at 14:03:12" */
+    private String sweepWords() {
+        return "the sweep started at " + ResultOrigin.timeOfDay(sweepStartedAt);
     }
 
     private void updateButtons() {

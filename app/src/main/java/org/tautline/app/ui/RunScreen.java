@@ -48,7 +48,7 @@ final class RunScreen {
         panel.add(controls, "growx 0");
         panel.add(progress, "h 22!");
         panel.add(settle);
-        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, traces.panel(), frf.panel());
+        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, traces.component(), frf.component());
         split.setResizeWeight(0.45);
         panel.add(split, "grow");
         frf.live(true);

@@ -25,6 +25,7 @@ import javax.swing.WindowConstants;
 import net.miginfocom.swing.MigLayout;
 import org.tautline.app.qualify.QualificationResult;
 import org.tautline.app.ui.project.RecentFiles;
+import org.tautline.app.ui.results.ResultOrigin;
 import org.tautline.app.ui.setup.SetupForm;
 import org.tautline.driver.spi.RigDrivers;
 
@@ -46,14 +47,27 @@ public final class Workbench implements WorkbenchParts {
     private final RunController runs;
     private final FileController files;
     private final ExportController exports;
+    private final LotAddGuard lotAdd;
 
     private Workbench(RigDrivers drivers, RecentFiles recent) {
         setup = new SetupScreen(SetupForm.demo(), this::edited);
-        runs = new RunController(this, drivers, this::showResult);
+        runs = new RunController(this, drivers, new RunController.ResultSink() {
+            @Override
+            public void show(QualificationResult result, ResultOrigin origin) {
+                showResult(result, origin);
+            }
+
+            @Override
+            public void withdraw(String why) {
+                withdrawResult(why);
+            }
+        });
         rig = new RigScreen(drivers, runs::connect, runs::disconnect);
         files = new FileController(this, runs, recent);
         exports = new ExportController(this);
         results.onRefit(this::resultChanged);
+        lotAdd = new LotAddGuard(lots.component());
+        lotAdd.resultCurrent(false);
     }
 
     /** Opens the window on the event thread, with the look the desktop prefers. */
@@ -131,10 +145,25 @@ public final class Workbench implements WorkbenchParts {
         lots.resultShown(result);
     }
 
-    private void showResult(QualificationResult result) {
-        results.showResults(result);
+    private void showResult(QualificationResult result, ResultOrigin origin) {
+        lotAdd.resultCurrent(true);
+        results.showResults(result, origin);
         resultChanged(result);
         tabs.setSelectedIndex(3);
+    }
+
+    /** The result on show is no longer current: it is marked so, and neither exported nor added to a lot. */
+    private void withdrawResult(String why) {
+        results.withdraw(why);
+        exports.resultWithdrawn();
+        lotAdd.resultCurrent(false);
+    }
+
+    @Override
+    public void noResult(String why) {
+        results.clear(why);
+        exports.resultWithdrawn();
+        lotAdd.resultCurrent(false);
     }
 
     private JFrame build() {

@@ -18,4 +18,11 @@ interface WorkbenchParts {
 
     /** Brings the setup screen to the front. */
     void showSetup();
+
+    /**
+     * Takes the result off the results screen (a new or another project): it is no longer exported or added to a lot.
+     *
+     * @param why what happened, as a sentence, shown on the empty results screen
+     */
+    void noResult(String why);
 }

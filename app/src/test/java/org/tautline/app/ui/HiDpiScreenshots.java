@@ -35,7 +35,8 @@ public final class HiDpiScreenshots {
             // A shorter sweep than the demo's 1061 steps keeps this run brief; the screens are the same.
             javax.swing.JTextField steps = find(w.frame(), javax.swing.JTextField.class, "stepCount");
             SwingUtilities.invokeAndWait(() -> steps.setText("400"));
-            Thread.sleep(300);
+            JLabel rigTime = find(w.frame(), JLabel.class, "rigTime");
+            waitFor("the shorter plan's rig time", 10, () -> rigTime.getText().contains("Rig time: about"));
             shoot(w.frame(), "hidpi-1-setup.png");
             SwingUtilities.invokeAndWait(() -> w.tabs().setSelectedIndex(1));
             AbstractButton connect = find(w.frame(), AbstractButton.class, "connect");
@@ -50,10 +51,11 @@ public final class HiDpiScreenshots {
             shoot(safety, "hidpi-3-safety.png");
             AbstractButton ok = SwingDriver.findButtonByText(safety, Workbench.START_CHOICE);
             SwingUtilities.invokeAndWait(ok::doClick);
-            Thread.sleep(1500);
+            javax.swing.JProgressBar progress = find(w.frame(), javax.swing.JProgressBar.class, "runProgress");
+            waitFor("some steps on the run screen", 60, () -> progress.getValue() > 100);
             shoot(w.frame(), "hidpi-4-run.png");
-            JLabel outcome = find(w.frame(), JLabel.class, "outcome");
-            waitFor("the verdict", 60, () -> outcome.getText().startsWith("Verdict"));
+            JLabel headline = find(w.frame(), JLabel.class, "verdictHeadline");
+            waitFor("the verdict", 60, () -> headline.isShowing() && !headline.getText().isEmpty());
             JTabbedPane resultTabs = find(w.frame(), JTabbedPane.class, "resultTabs");
             shoot(w.frame(), "hidpi-5-results-1.png");
             SwingUtilities.invokeAndWait(() -> resultTabs.setSelectedIndex(resultTabs.getTabCount() - 1));

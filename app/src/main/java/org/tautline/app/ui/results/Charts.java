@@ -1,46 +1,28 @@
 package org.tautline.app.ui.results;
 
-import org.tautline.app.ui.Palette;
-import java.awt.Color;
-import java.awt.Font;
-
-import javax.swing.UIManager;
-
-import org.jfree.chart.ChartPanel;
 import org.jfree.chart.JFreeChart;
-import org.jfree.chart.axis.LogarithmicAxis;
 import org.jfree.chart.plot.Plot;
-import org.jfree.chart.plot.XYPlot;
+import org.tautline.app.ui.chart.ChartStyle;
+import org.tautline.app.ui.chart.ChartView;
+import org.tautline.app.ui.chart.LogScaleAxis;
 
-/** Shared chart set-up: white plots, light grid, fonts from the look and feel. */
+/** Shared set-up of the results charts: our log axis, and a {@link ChartView} in the current look. */
 final class Charts {
     private Charts() {
     }
 
-    static LogarithmicAxis logAxis(String label) {
-        LogarithmicAxis axis = new LogarithmicAxis(label);
-        axis.setStrictValuesFlag(false);
-        axis.setAutoRangeIncludesZero(false);
-        return axis;
+    static LogScaleAxis logAxis(String label) {
+        return new LogScaleAxis(label);
     }
 
-    static void style(XYPlot plot) {
-        plot.setBackgroundPaint(Color.WHITE);
-        plot.setDomainGridlinePaint(Palette.GRID);
-        plot.setRangeGridlinePaint(Palette.GRID);
-    }
-
-    static ChartPanel panel(String title, Plot plot, boolean legend) {
-        Font base = UIManager.getFont("Label.font");
-        Font titleFont = base == null ? JFreeChart.DEFAULT_TITLE_FONT : base.deriveFont(Font.BOLD, base.getSize2D() * 1.15f);
-        JFreeChart chart = new JFreeChart(title, titleFont, plot, legend);
-        chart.setBackgroundPaint(Color.WHITE);
-        ChartPanel panel = new ChartPanel(chart, false, true, false, true, true);
-        panel.setMouseWheelEnabled(true);
-        panel.setMinimumDrawWidth(100);
-        panel.setMinimumDrawHeight(100);
-        panel.setMaximumDrawWidth(4000);
-        panel.setMaximumDrawHeight(3000);
-        return panel;
+    /**
+     * @param title the chart title
+     * @param plot the plot
+     * @param legend true to show a legend
+     * @param wholeRange what "Show whole range" does; null to fit every axis to the data
+     * @return the chart on screen
+     */
+    static ChartView view(String title, Plot plot, boolean legend, Runnable wholeRange) {
+        return new ChartView(new JFreeChart(title, ChartStyle.titleFont(), plot, legend), wholeRange);
     }
 }

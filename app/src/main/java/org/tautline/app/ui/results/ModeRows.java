@@ -10,8 +10,8 @@ import org.tautline.app.qualify.QualificationResult;
 /** The rows of the mode table: one per fitted mode, in frequency order. Free of Swing. */
 final class ModeRows {
     /** Column titles. */
-    static final List<String> COLUMNS = List.of("Harmonic", "Polarisation", "f (Hz)", "Damping ratio",
-            "Modal constant (1/kg)");
+    static final List<String> COLUMNS = List.of("Harmonic n", "Polarisation", "Natural frequency (Hz)",
+            "Damping ratio", "Modal constant (1/kg)");
 
     private ModeRows() {
     }
@@ -21,9 +21,9 @@ final class ModeRows {
      *
      * @param harmonic harmonic number, or "none" for a mode outside the series
      * @param polarisation "single", "lower" or "upper"
-     * @param frequency f ± std
-     * @param damping zeta ± std
-     * @param modalConstant real part ± std, and the imaginary part when it is not negligible
+     * @param frequency natural frequency ± its standard uncertainty, rounded as the GUM asks
+     * @param damping damping ratio ± its standard uncertainty
+     * @param modalConstant real part ± its standard uncertainty, and the imaginary part when it is not negligible
      */
     record Row(String harmonic, String polarisation, String frequency, String damping, String modalConstant) {
         String cell(int column) {
@@ -51,9 +51,9 @@ final class ModeRows {
         return rows;
     }
 
-    private static Row rowOf(QualifiedMode m) {
+    static Row rowOf(QualifiedMode m) {
         FittedMode f = m.fitted();
-        String harmonic = m.harmonic() > 0 ? Integer.toString(m.harmonic()) : "none";
+        String harmonic = m.harmonic() > 0 ? Integer.toString(m.harmonic()) : "not in the series";
         String polarisation = switch (m.polarisation()) {
             case 1 -> "lower of a pair";
             case 2 -> "upper of a pair";
@@ -63,7 +63,7 @@ final class ModeRows {
         double im = f.mode().modalConstant().getImaginary();
         String constant = Figures.plusMinus(re, f.modalConstantStd().getReal());
         if (Math.abs(im) > 1e-6 * Math.abs(re)) {
-            constant += " , j " + Figures.plusMinus(im, f.modalConstantStd().getImaginary());
+            constant += " + j (" + Figures.plusMinus(im, f.modalConstantStd().getImaginary()) + ")";
         }
         return new Row(harmonic, polarisation, Figures.plusMinus(f.mode().frequencyHz(), f.frequencyStdHz()),
                 Figures.plusMinus(f.mode().dampingRatio(), f.dampingRatioStd()), constant);

@@ -11,6 +11,11 @@ final class ModeTableModel extends AbstractTableModel {
     private static final long serialVersionUID = 1L;
     private transient List<ModeRows.Row> rows = List.of();
 
+    void clear() {
+        rows = List.of();
+        fireTableDataChanged();
+    }
+
     void show(QualificationResult result) {
         rows = ModeRows.of(result);
         fireTableDataChanged();

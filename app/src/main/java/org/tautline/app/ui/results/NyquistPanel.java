@@ -9,21 +9,23 @@ import javax.swing.JComponent;
 import javax.swing.JPanel;
 
 import org.hipparchus.complex.Complex;
-import org.jfree.chart.ChartPanel;
 import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 import org.tautline.app.qualify.QualificationResult;
+import org.tautline.app.ui.chart.ChartView;
 
 /** Real against imaginary mobility around one mode: measured lines, the model's curve and the fitted circle. */
 final class NyquistPanel {
     private final XYSeries measured = new XYSeries("measured", false, true);
     private final XYSeries model = new XYSeries("fitted model", false, true);
     private final XYSeries circle = new XYSeries("fitted circle", false, true);
-    private final ChartPanel component;
+    private final ChartView view;
+    private final JComponent component;
     private final JPanel square;
+    private NyquistData shownData;
 
     NyquistPanel() {
         XYSeriesCollection data = new XYSeriesCollection();
@@ -41,13 +43,14 @@ final class NyquistPanel {
         renderer.setSeriesPaint(2, Palette.SECOND);
         renderer.setSeriesStroke(2, new BasicStroke(1.2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
                 new float[] {6f, 4f}, 0f));
-        NumberAxis re = new NumberAxis("Re Y (m/(N s))");
-        NumberAxis im = new NumberAxis("Im Y (m/(N s))");
+        NumberAxis re = new NumberAxis("Re Y, real part of the mobility (m/(N s))");
+        NumberAxis im = new NumberAxis("Im Y, imaginary part (m/(N s))");
         re.setAutoRangeIncludesZero(false);
         im.setAutoRangeIncludesZero(false);
         XYPlot plot = new XYPlot(data, re, im, renderer);
-        Charts.style(plot);
-        component = Charts.panel("Mobility around the selected mode", plot, true);
+        view = Charts.view("Mobility around the selected mode", plot, true, this::wholeRange);
+        view.emptyMessage("No result yet");
+        component = view.component();
         square = new JPanel(null) {
             private static final long serialVersionUID = 1L;
 
@@ -59,7 +62,6 @@ final class NyquistPanel {
                 component.setBounds((getWidth() - side) / 2, 0, side, height);
             }
         };
-        square.setBackground(java.awt.Color.WHITE);
         square.add(component);
     }
 
@@ -67,12 +69,30 @@ final class NyquistPanel {
         return square;
     }
 
+    private void wholeRange() {
+        if (shownData != null) {
+            equalScales(shownData);
+        } else {
+            view.chartPanel().restoreAutoBounds();
+        }
+    }
+
+    /** Empties the chart, for a screen with no result. */
+    void clear() {
+        measured.clear();
+        model.clear();
+        circle.clear();
+        shownData = null;
+        view.chart().setTitle("Mobility around the selected mode");
+    }
+
     void show(QualificationResult result, int modeIndex) {
         measured.clear();
         model.clear();
         circle.clear();
+        shownData = null;
         if (modeIndex < 0 || modeIndex >= result.modes().size()) {
-            component.getChart().setTitle("Mobility around the selected mode (select a mode in the table)");
+            view.chart().setTitle("Mobility around the selected mode (select a mode in the table)");
             return;
         }
         var mode = result.modes().get(modeIndex).mode();
@@ -80,8 +100,9 @@ final class NyquistPanel {
         fill(measured, data.measured());
         fill(model, data.model());
         fill(circle, List.of(data.circlePoints(120)));
+        shownData = data;
         equalScales(data);
-        component.getChart().setTitle(String.format(java.util.Locale.ROOT, "Mobility around %.5g Hz (%.5g .. %.5g Hz)",
+        view.chart().setTitle(String.format(java.util.Locale.ROOT, "Mobility around %.5g Hz (%.5g to %.5g Hz)",
                 mode.frequencyHz(), data.fromHz(), data.toHz())
                 + (data.circle().isEmpty() ? ": too few lines for a circle" : ""));
     }
@@ -98,7 +119,7 @@ final class NyquistPanel {
         double imLow = all.stream().mapToDouble(Complex::getImaginary).min().orElseThrow();
         double imHigh = all.stream().mapToDouble(Complex::getImaginary).max().orElseThrow();
         double half = 0.55 * Math.max(Math.max(reHigh - reLow, imHigh - imLow), 1e-30);
-        XYPlot plot = component.getChart().getXYPlot();
+        XYPlot plot = view.chart().getXYPlot();
         plot.getDomainAxis().setRange(0.5 * (reLow + reHigh) - half, 0.5 * (reLow + reHigh) + half);
         plot.getRangeAxis().setRange(0.5 * (imLow + imHigh) - half, 0.5 * (imLow + imHigh) + half);
     }

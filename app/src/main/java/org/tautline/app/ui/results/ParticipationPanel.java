@@ -6,7 +6,6 @@ import java.awt.geom.Ellipse2D;
 
 import javax.swing.JComponent;
 
-import org.jfree.chart.ChartPanel;
 import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYErrorRenderer;
@@ -14,12 +13,13 @@ import org.jfree.data.xy.XYIntervalSeries;
 import org.jfree.data.xy.XYIntervalSeriesCollection;
 import org.tautline.analysis.specimen.ParticipationEntry;
 import org.tautline.app.qualify.QualificationResult;
+import org.tautline.app.ui.chart.ChartView;
 
 /** Measured modal constants (with 2-sigma bars) against those expected from the stated setup, per harmonic. */
 final class ParticipationPanel {
     private final XYIntervalSeries measured = new XYIntervalSeries("measured ± 2 std");
     private final XYIntervalSeries expected = new XYIntervalSeries("expected at the stated positions (scaled)");
-    private final ChartPanel component;
+    private final ChartView view;
 
     ParticipationPanel() {
         XYIntervalSeriesCollection data = new XYIntervalSeriesCollection();
@@ -38,19 +38,26 @@ final class ParticipationPanel {
         NumberAxis harmonic = new NumberAxis("Harmonic n");
         harmonic.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
         XYPlot plot = new XYPlot(data, harmonic, new NumberAxis("Modal constant (1/kg)"), renderer);
-        Charts.style(plot);
-        component = Charts.panel("Participation pattern", plot, true);
+        view = Charts.view("Participation pattern", plot, true, null);
+        view.emptyMessage("No result yet");
     }
 
     JComponent component() {
-        return component;
+        return view.component();
+    }
+
+    /** Empties the chart, for a screen with no result. */
+    void clear() {
+        measured.clear();
+        expected.clear();
+        view.chart().setTitle("Participation pattern");
     }
 
     void show(QualificationResult result) {
         measured.clear();
         expected.clear();
         if (result.participation().isEmpty()) {
-            component.getChart().setTitle("Participation pattern: needs at least two numbered harmonics");
+            view.chart().setTitle("Participation pattern: needs at least two numbered harmonics");
             return;
         }
         var fit = result.participation().get();
@@ -61,7 +68,7 @@ final class ParticipationPanel {
             double x = fit.statedScale() * e.expectedModalConstant();
             expected.add(e.harmonic(), e.harmonic(), e.harmonic(), x, x, x);
         }
-        component.getChart().setTitle(String.format(java.util.Locale.ROOT,
+        view.chart().setTitle(String.format(java.util.Locale.ROOT,
                 "Participation pattern (misfit per degree of freedom %.3g at the stated positions)",
                 fit.statedReducedChiSquare()));
     }

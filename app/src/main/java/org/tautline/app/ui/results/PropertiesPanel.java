@@ -1,6 +1,5 @@
 package org.tautline.app.ui.results;
 
-import org.tautline.app.ui.Palette;
 import java.awt.Component;
 import java.util.List;
 
@@ -14,12 +13,12 @@ import javax.swing.table.DefaultTableCellRenderer;
 import javax.swing.table.DefaultTableModel;
 
 import net.miginfocom.swing.MigLayout;
+import org.tautline.analysis.verdict.Outcome;
 import org.tautline.app.qualify.QualificationResult;
 
 /** Tension, bending stiffness and positions with their uncertainties, then the verdict per limit and its reasons. */
 final class PropertiesPanel {
     private final JPanel properties = new JPanel(new MigLayout("insets 0, wrap 2", "[][grow]"));
-    private final JLabel outcome = new JLabel();
     private final DefaultTableModel verdict = new DefaultTableModel(PropertyLines.VERDICT_COLUMNS.toArray(), 0) {
         private static final long serialVersionUID = 1L;
 
@@ -28,13 +27,14 @@ final class PropertiesPanel {
             return false;
         }
     };
+    private final JTable table = new JTable(verdict);
     private final JTextArea reasons = new JTextArea();
-    private final JPanel component = new JPanel(new MigLayout("fill, wrap 1", "[grow, fill]", "[][][fill][][grow, fill]"));
+    private final JPanel component = new JPanel(new MigLayout("fill, wrap 1", "[grow, fill]", "[][fill][][grow, fill]"));
 
     PropertiesPanel() {
-        JTable table = new JTable(verdict);
         table.setName("verdictTable");
         table.setFillsViewportHeight(true);
+        table.setAutoResizeMode(JTable.AUTO_RESIZE_LAST_COLUMN);
         // Room for about eight limits; the reasons below take the rest of the height.
         table.setPreferredScrollableViewportSize(new java.awt.Dimension(600, 8 * table.getRowHeight()));
         table.getColumnModel().getColumn(4).setCellRenderer(new DefaultTableCellRenderer() {
@@ -44,7 +44,10 @@ final class PropertiesPanel {
             public Component getTableCellRendererComponent(JTable t, Object value, boolean selected, boolean focus,
                                                            int row, int column) {
                 Component c = super.getTableCellRendererComponent(t, value, selected, focus, row, column);
-                c.setForeground(colourOf(String.valueOf(value)));
+                // The banner's colours: they read the same in the light and the dark look.
+                VerdictColours colours = VerdictColours.of(outcomeOf(String.valueOf(value)));
+                c.setBackground(colours.background());
+                c.setForeground(colours.text());
                 return c;
             }
         });
@@ -52,17 +55,21 @@ final class PropertiesPanel {
         reasons.setLineWrap(true);
         reasons.setWrapStyleWord(true);
         reasons.setName("reasons");
-        outcome.setName("outcome");
-        outcome.setFont(outcome.getFont().deriveFont(java.awt.Font.BOLD, outcome.getFont().getSize2D() * 1.2f));
         component.add(properties);
-        component.add(outcome, "gaptop para");
-        component.add(new JScrollPane(table));
-        component.add(new JLabel("Reasons and notes"));
+        component.add(new JScrollPane(table), "gaptop para");
+        component.add(new JLabel("Why: the verdict per limit, then the notes of the fit"));
         component.add(new JScrollPane(reasons));
     }
 
     JComponent component() {
         return component;
+    }
+
+    /** Empties the panel, for a screen with no result. */
+    void clear() {
+        properties.removeAll();
+        verdict.setRowCount(0);
+        reasons.setText("");
     }
 
     void show(QualificationResult result) {
@@ -75,17 +82,17 @@ final class PropertiesPanel {
         verdict.setRowCount(0);
         List<String[]> rows = PropertyLines.verdictRows(result);
         rows.forEach(verdict::addRow);
-        outcome.setText(result.verdict().map(v -> "Verdict: " + v.outcome()).orElse("No specification: no verdict"));
-        outcome.setForeground(result.verdict().map(v -> colourOf(v.outcome().toString())).orElse(java.awt.Color.BLACK));
+        ColumnWidths.fitToContent(table);
         reasons.setText(String.join("\n", PropertyLines.reasons(result)));
         reasons.setCaretPosition(0);
     }
 
-    private static java.awt.Color colourOf(String outcome) {
-        return switch (outcome) {
-            case "PASS" -> Palette.PASS.darker();
-            case "FAIL" -> Palette.FAIL;
-            default -> Palette.UNDETERMINED.darker();
-        };
+    private static java.util.Optional<Outcome> outcomeOf(String label) {
+        for (Outcome o : Outcome.values()) {
+            if (o.label().equals(label)) {
+                return java.util.Optional.of(o);
+            }
+        }
+        return java.util.Optional.empty();
     }
 }

@@ -80,7 +80,7 @@ final class RefitScheduler {
         return running != null;
     }
 
-    /** Consumer form for tests. */
+    /** @return a listener made of three callbacks */
     static Listener of(Consumer<QualificationResult> finished, Consumer<String> failed, Runnable idle) {
         return new Listener() {
             @Override

@@ -23,16 +23,20 @@ import org.tautline.analysis.modal.Pole;
 import org.tautline.analysis.modal.StabilisationChart;
 import org.tautline.analysis.modal.StabilisationPoint;
 import org.tautline.analysis.modal.StabilityClass;
+import org.tautline.app.ui.chart.ChartStyle;
+import org.tautline.app.ui.chart.ChartView;
 
 /** Model order against frequency over the FRF magnitude; a click on a pole reports it to a listener. */
 final class StabilisationPanel {
-    private static final String[] NAMES = {"chosen", "frequency, damping and modal constant agree",
-        "frequency and damping agree", "frequency agrees", "no match in the order below"};
+    private static final String[] NAMES = {"chosen", StabilityClass.STABLE.label(), StabilityClass.DAMPING.label(),
+        StabilityClass.FREQUENCY.label(), StabilityClass.NEW.label() + " (no match in the order below)"};
     private final XYSeriesCollection poles = new XYSeriesCollection();
     private final List<List<Pole>> polesBySeries = new ArrayList<>();
     private final XYSeries magnitude = new XYSeries("|H| (right axis)", true, false);
     private final NumberAxis frequencyAxis = new NumberAxis("Frequency (Hz)");
-    private final ChartPanel component;
+    private final ChartView view;
+    private double bandLowHz = Double.NaN;
+    private double bandHighHz = Double.NaN;
 
     StabilisationPanel(Consumer<Pole> onPoleClicked) {
         XYLineAndShapeRenderer symbols = new XYLineAndShapeRenderer(false, true);
@@ -41,7 +45,6 @@ final class StabilisationPanel {
             polesBySeries.add(new ArrayList<>());
         }
         symbols.setSeriesShape(0, PoleSymbols.ring());
-        symbols.setSeriesPaint(0, Palette.CHOSEN);
         symbols.setSeriesShapesFilled(0, false);
         symbols.setSeriesOutlineStroke(0, new BasicStroke(2f));
         symbols.setSeriesStroke(0, new BasicStroke(2f));
@@ -60,9 +63,12 @@ final class StabilisationPanel {
         symbols.setUseOutlinePaint(false);
         symbols.setDrawOutlines(true);
         frequencyAxis.setAutoRangeIncludesZero(false);
+        // Plain numbers: 1500, not 1,500.
+        java.text.NumberFormat plain = java.text.NumberFormat.getNumberInstance(java.util.Locale.ROOT);
+        plain.setGroupingUsed(false);
+        frequencyAxis.setNumberFormatOverride(plain);
         NumberAxis orderAxis = new NumberAxis("Model order");
         XYPlot plot = new XYPlot(poles, frequencyAxis, orderAxis, symbols);
-        Charts.style(plot);
         XYLineAndShapeRenderer line = new XYLineAndShapeRenderer(true, false);
         line.setSeriesPaint(0, new Color(0x88, 0x88, 0x88));
         plot.setDataset(1, new XYSeriesCollection(magnitude));
@@ -70,7 +76,11 @@ final class StabilisationPanel {
         plot.mapDatasetToRangeAxis(1, 1);
         plot.setRenderer(1, line);
         plot.setDatasetRenderingOrder(org.jfree.chart.plot.DatasetRenderingOrder.FORWARD);
-        component = Charts.panel("Poles by model order (click a pole to add it, a ringed one to drop it)", plot, true);
+        view = Charts.view("Poles by model order (click a pole to add it, a ringed one to drop it)", plot, true,
+                this::wholeRange);
+        view.emptyMessage("No result yet");
+        view.afterRestyle(() -> symbols.setSeriesPaint(0, ChartStyle.foreground()));
+        ChartPanel component = view.chartPanel();
         component.setName("poleChart");
         component.addChartMouseListener(new ChartMouseListener() {
             @Override
@@ -88,7 +98,23 @@ final class StabilisationPanel {
     }
 
     JComponent component() {
-        return component;
+        return view.component();
+    }
+
+    private void wholeRange() {
+        view.chartPanel().restoreAutoBounds();
+        if (Double.isFinite(bandLowHz) && bandHighHz > bandLowHz) {
+            frequencyAxis.setRange(bandLowHz, bandHighHz);
+        }
+    }
+
+    /** Empties the chart, for a screen with no result. */
+    void clear() {
+        for (int s = 0; s < NAMES.length; s++) {
+            poles.getSeries(s).clear();
+            polesBySeries.get(s).clear();
+        }
+        magnitude.clear();
     }
 
     void show(StabilisationChart chart, PoleChoice choice, Frf receptance) {
@@ -120,6 +146,8 @@ final class StabilisationPanel {
             }
         }
         magnitude.fireSeriesChanged();
+        bandLowHz = low;
+        bandHighHz = high;
         frequencyAxis.setRange(low, high);
     }
 
