@@ -72,9 +72,23 @@ public final class SimulatedRig implements Rig {
                         displacement ? "m" : "m/s^2"));
     }
 
+    /**
+     * @return what the rig is, including the simulated specimen's tension, mass per length, bending stiffness, ends
+     *         and damping, so that a journal recorded on one simulated specimen is not resumed on another
+     */
     @Override
     public String identity() {
-        return "Tautline simulated rig (model of specimen, shaker and sensors), seed " + config.randomSeed();
+        SimulatedSpecimen s = config.specimen();
+        double zeta1 = truth.modes().isEmpty() ? Double.NaN : truth.modes().get(0).mode().dampingRatio();
+        return "Tautline simulated rig (model of specimen, shaker and sensors), specimen " + digits(s.tensionN()) + " N, "
+                + digits(s.linearDensityKgPerM()) + " kg/m, EI " + digits(s.bendingStiffnessNm2()) + " N m^2, "
+                + s.ends().label() + " ends, damping " + digits(zeta1) + ", seed " + config.randomSeed();
+    }
+
+    /** Six significant digits without trailing zeros: 146.5, 0.002, 0.000614. */
+    private static String digits(double value) {
+        return Double.isFinite(value) ? new java.math.BigDecimal(value).round(new java.math.MathContext(6))
+                .stripTrailingZeros().toPlainString() : "unknown";
     }
 
     @Override

@@ -91,8 +91,8 @@ class SweepResumeTest {
         assertEquals(first.points(), resumed.points().subList(0, 5), "the recorded steps are kept as they were");
         assertEquals(13, progress.size(), "the 5 recorded steps are reported, then the 8 new ones");
         assertEquals(6, progress.get(5).stepNumber(), "progress counts the recorded steps as done");
-        assertEquals(List.of("resuming " + file + " after 5 completed step(s) on Tautline simulated rig (model of specimen,"
-                + " shaker and sensors), seed 1"), notices);
+        String asBuilt = new SimulatedRigDriver().open(JournalFixtures.SIM_OPTIONS).identity();
+        assertEquals(List.of("resuming " + file + " after 5 completed step(s) on " + asBuilt), notices);
 
         JournalContents after = JournalReader.read(file);
         assertEquals(Optional.empty(), after.warning());
@@ -209,8 +209,9 @@ class SweepResumeTest {
         };
         RigException e = assertThrows(RigException.class, () -> JournaledSweep.resume(RigDrivers.of(List.of(otherSeed)),
                 file, Map.of(), n -> { }, SweepEventListener.NONE, SweepControl.none(), JournalFixtures.CLOCK));
-        assertEquals("journal " + file + " was recorded on 'Tautline simulated rig (model of specimen, shaker and sensors),"
-                + " seed 1' but the rig now answers 'Tautline simulated rig (model of specimen, shaker and sensors), seed 2';"
+        String recorded = new SimulatedRigDriver().open(JournalFixtures.SIM_OPTIONS).identity();
+        String now = otherSeed.open(Map.of()).identity();
+        assertEquals("journal " + file + " was recorded on '" + recorded + "' but the rig now answers '" + now + "';"
                 + " a sweep can only be resumed on the rig it started on", e.getMessage());
         assertEquals(2, JournalReader.read(file).steps().size(), "nothing was appended");
     }

@@ -3,8 +3,11 @@ package org.tautline.driver.sim;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.Map;
 
 import org.junit.jupiter.api.Test;
 import org.tautline.driver.RigException;
@@ -125,6 +128,16 @@ class SimulatedRigBehaviourTest {
         assertFalse(rig.exciter().isOutputEnabled(), "close switches the output off");
         rig.close();
         assertTrue(rig.identity().endsWith("seed 1"), rig.identity());
+    }
+
+    @Test
+    void identityTellsTheWireAsBuiltFromADrawnSpecimenWithTheSameNoiseSeed() {
+        String asBuilt = new SimulatedRigDriver().open(Map.of()).identity();
+        String drawn = new SimulatedRigDriver().open(Map.of("seed", "1")).identity();
+        assertTrue(asBuilt.contains("146.5 N"), asBuilt);
+        assertTrue(asBuilt.endsWith("seed 1") && drawn.endsWith("seed 1"), asBuilt + " / " + drawn);
+        assertNotEquals(asBuilt, drawn, "a journal of one specimen must not resume on another");
+        assertEquals(asBuilt, new SimulatedRigDriver().open(Map.of("seed", "none")).identity());
     }
 
     private static double rms(double[] x) {
