@@ -4,7 +4,9 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Instant;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import java.util.OptionalDouble;
 import java.util.OptionalLong;
@@ -19,6 +21,7 @@ import org.tautline.app.qualify.DemoRun;
 import org.tautline.app.qualify.DemoScenario;
 import org.tautline.app.qualify.ResultText;
 import org.tautline.app.qualify.SweepStoppedException;
+import org.tautline.app.trace.SetupFile;
 import org.tautline.driver.sim.SimulationConfig;
 import org.tautline.driver.sim.SimulationConfigs;
 import org.tautline.driver.sweep.SweepEventListener;
@@ -75,11 +78,15 @@ final class DemoCommand implements Callable<Integer> {
         if (outDir == null && lot != null) {
             throw new IllegalArgumentException("--lot needs --out DIR: the register keeps where the run's files are");
         }
+        if (outDir != null) {
+            refuseRecordedFolder(outDir);
+        }
         OptionalLong specimenSeed = seedOption();
         SimulationConfig simulation = DemoScenario.simulation(specimenSeed, tensionOption());
         System.err.print(SafetyNotice.asText(true));
         System.err.flush();
         DemoOutcome outcome;
+        Instant startedAt = Instant.now();
         try (SignalStop stop = new SignalStop()) {
             outcome = DemoRun.run(simulation, DemoScenario.specimen(specimenSeed), DemoScenario.plan(),
                     DemoScenario.specification(), progress(), stop.control());
@@ -102,10 +109,31 @@ final class DemoCommand implements Callable<Integer> {
         out.flush();
         if (outDir != null) {
             write(outcome, json, simulated, outDir);
-            System.err.println("tautline: wrote frf.csv, truth.json, result.json, specimen.json and spec.json to " + outDir);
+            SetupFile.write(outDir, DemoRecords.setup(startedAt, simulation));
+            System.err.println("tautline: wrote frf.csv, truth.json, result.json, specimen.json, spec.json and setup.json to "
+                    + outDir);
             DemoRecords.write(outDir, lot, register, operator);
         }
         return ExitCodes.of(outcome.result().verdict());
+    }
+
+    /**
+     * The demo writes a new run folder; one that already holds files (an earlier run, perhaps in a lot) is refused
+     * before anything is excited, so no recorded run is overwritten.
+     */
+    private static void refuseRecordedFolder(Path dir) throws IOException {
+        if (Files.isRegularFile(dir)) {
+            throw new IllegalArgumentException("--out " + dir + " is a file; expected a new or empty folder for the run");
+        }
+        if (Files.isDirectory(dir)) {
+            try (java.util.stream.Stream<Path> entries = Files.list(dir)) {
+                List<String> names = entries.map(p -> p.getFileName().toString()).sorted().limit(6).toList();
+                if (!names.isEmpty()) {
+                    throw new IllegalArgumentException("--out " + dir + " already holds " + String.join(", ", names)
+                            + "; expected a new or empty folder, so that no recorded run is overwritten");
+                }
+            }
+        }
     }
 
     private SweepEventListener progress() {

@@ -7,6 +7,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalLong;
 
@@ -20,6 +21,9 @@ import org.tautline.app.qualify.DemoScenario;
 import org.tautline.app.report.QualificationReport;
 import org.tautline.app.report.ReportInfo;
 import org.tautline.app.report.RunDirectory;
+import org.tautline.app.trace.Instrument;
+import org.tautline.app.trace.RigDescription;
+import org.tautline.app.trace.RunSetup;
 import org.tautline.driver.sim.SensorSetup;
 import org.tautline.driver.sim.ShakerModel;
 import org.tautline.driver.sim.SimulationConfig;
@@ -82,6 +86,28 @@ final class DemoRecords {
         return m;
     }
 
+    /**
+     * What the run folder records of the demo's setup: when it ran and on which rig. The simulated rig has no air and
+     * its instruments no serials or certificates, so those are left out and the report says "not given".
+     *
+     * @param startedAt when the demo's sweep started
+     * @param sim the simulated rig the demo ran on
+     * @return the setup to record in {@code setup.json}
+     */
+    static RunSetup setup(Instant startedAt, SimulationConfig sim) {
+        Map<String, String> m = rigMetadata(sim);
+        Optional<String> simulation = Optional.of("simulation (invented)");
+        List<Instrument> instruments = List.of(
+                new Instrument("exciter: " + m.get("exciter"), simulation, Optional.empty(), Optional.empty(),
+                        Optional.empty()),
+                new Instrument("force sensor: " + m.get("force sensor"), simulation, Optional.empty(), Optional.empty(),
+                        Optional.empty()),
+                new Instrument("response sensor: " + m.get("response sensor"), simulation, Optional.empty(),
+                        Optional.empty(), Optional.empty()));
+        return new RunSetup(Optional.of(startedAt), OptionalDouble.empty(), OptionalDouble.empty(),
+                Optional.of(new RigDescription(m.get("rig"), instruments)));
+    }
+
     private static String fmt(double v) {
         return String.format(Locale.ROOT, "%.4g", v);
     }
@@ -92,8 +118,8 @@ final class DemoRecords {
         List<FigureStatistics> statistics = List.of();
         if (lot != null) {
             String location = register != null ? register : LotCommand.besideRuns(dir);
-            try (LotRegister r = LotRegister.open(location)) {
-                r.append(LotEntries.of(lot, run.result(), dir.toAbsolutePath().toString(), Instant.now()));
+            try (LotRegister r = LotRegister.openForAppending(location)) {
+                r.append(LotEntries.ofRunFolder(lot, run.result(), dir, run.frfSha256(), Instant.now()));
                 statistics = LotStatistics.of(r.entries(lot));
                 System.err.println("tautline: appended " + run.result().specimen().id() + " to lot " + lot + " in " + r.name());
             }

@@ -1,6 +1,7 @@
 package org.tautline.app.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.PrintWriter;
@@ -12,6 +13,8 @@ import java.util.List;
 import com.fasterxml.jackson.databind.JsonNode;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.tautline.app.trace.RunSetup;
+import org.tautline.app.trace.SetupFile;
 import picocli.CommandLine;
 
 /** {@code tautline demo --json --out DIR} end to end, as a script would call it. */
@@ -106,6 +109,24 @@ class DemoCommandTest {
         }
         assertTrue(fitted.get("residuals").get("upper").has("re"));
         assertTrue(fitted.get("quality").get("normalisedResidual").asDouble() < 0.1);
+
+        // The run folder records when the demo ran and on which rig, for the report's traceability.
+        RunSetup setup = SetupFile.read(runDir);
+        assertTrue(setup.testedAt().isPresent(), "the test date is recorded");
+        assertTrue(setup.rig().orElseThrow().name().contains("simulated rig (invented)"), setup.toString());
+        assertTrue(setup.temperatureC().isEmpty(), "a simulation has no air temperature to record");
+    }
+
+    @Test
+    void aFolderThatAlreadyHoldsFilesIsRefusedBeforeAnythingIsExcited(@TempDir Path dir) throws Exception {
+        Path earlier = dir.resolve("earlier-run");
+        Files.createDirectories(earlier);
+        Files.writeString(earlier.resolve("frf.csv"), "# an earlier run's data\n");
+        CliRun r = CliRun.of("demo", "--no-progress", "--out", earlier.toString());
+        assertEquals(1, r.exitCode(), r.err());
+        assertTrue(r.err().contains("--out " + earlier + " already holds frf.csv"), r.err());
+        assertEquals(1, Files.list(earlier).count(), "refused before the demo ran: nothing was written beside it");
+        assertEquals("# an earlier run's data\n", Files.readString(earlier.resolve("frf.csv")), "nothing overwritten");
     }
 
     @Test

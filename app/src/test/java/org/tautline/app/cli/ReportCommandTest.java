@@ -101,10 +101,11 @@ class ReportCommandTest {
             assertTrue(!text.contains(programName), "'" + programName + "' reaches the report");
         }
         assertTrue(text.contains("Report number: not given"), "no report number is made up");
-        assertTrue(text.contains("Tested: not given"), "the demo's run folder records no test date");
+        assertTrue(text.contains("Tested: ") && !text.contains("Tested: not given"), "the demo records when it ran");
         assertTrue(text.contains("temperature not given, relative humidity not given"), "no air is made up");
         assertTrue(text.contains("Specification: demo tie wire"), "the specification by name");
-        assertTrue(text.contains("No rig file was recorded for this run"), "no serial is made up");
+        assertTrue(text.contains("Rig: simulated rig (invented)"), "the demo names its simulated rig");
+        assertTrue(text.contains("simulation (invented)") && text.contains("not given"), "no serial is made up");
         try (PDDocument document = Loader.loadPDF(runDir.resolve("report.pdf").toFile())) {
             int pages = document.getNumberOfPages();
             assertTrue(text.contains("page 1 of " + pages) && text.contains("page " + pages + " of " + pages), text);
