@@ -9,6 +9,7 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.tautline.app.qualify.DemoScenario;
 import org.tautline.app.bench.FrfBenchmark;
 import org.tautline.app.bench.ModalBenchmark;
+import org.tautline.app.bench.UiBenchmark;
 import org.tautline.driver.serial.SerialBenchmark;
 import org.tautline.driver.sim.SimulatorBenchmark;
 import org.tautline.driver.sim.SweepBenchmark;
@@ -21,7 +22,7 @@ import picocli.CommandLine.Model.CommandSpec;
 @Command(name = "bench", mixinStandardHelpOptions = true,
         description = "Run a benchmark and print its figures.",
         subcommands = {BenchCommand.Simulator.class, BenchCommand.FrfFromWav.class, BenchCommand.Modal.class,
-                BenchCommand.Serial.class, BenchCommand.Sweep.class, StopSignalBench.class})
+                BenchCommand.Serial.class, BenchCommand.Sweep.class, StopSignalBench.class, UiBenchmark.class})
 final class BenchCommand implements Runnable {
     @Spec
     private CommandSpec spec;

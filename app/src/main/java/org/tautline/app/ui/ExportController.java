@@ -131,7 +131,7 @@ final class ExportController {
                 } catch (InterruptedException e) {
                     Thread.currentThread().interrupt();
                 } catch (ExecutionException e) {
-                    String why = e.getCause() == null ? e.toString() : e.getCause().getMessage();
+                    String why = PlainWords.of(e.getCause() == null ? e.toString() : e.getCause().getMessage());
                     parts.status().message(failure + ": " + why);
                     JOptionPane.showMessageDialog(parts.frame(), "<html><b>" + failure + "</b><br>" + why + "</html>",
                             "Tautline", JOptionPane.ERROR_MESSAGE);

@@ -301,9 +301,15 @@ final class FileController {
     }
 
     private void error(String what, Throwable cause) {
-        parts.status().message(what + ": " + cause.getMessage());
-        JOptionPane.showMessageDialog(parts.frame(), "<html><b>" + what + "</b><br>" + cause.getMessage() + "</html>",
+        // A file's message names the file's own fields as they are written in it: it is passed on as it stands.
+        String why = String.valueOf(cause.getMessage());
+        parts.status().message(what + ": " + why);
+        JOptionPane.showMessageDialog(parts.frame(), "<html><b>" + what + "</b><br>" + escape(why) + "</html>",
                 "Tautline", JOptionPane.ERROR_MESSAGE);
+    }
+
+    private static String escape(String text) {
+        return text.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
     }
 
     private static JFileChooser chooser(String description, String... extensions) {

@@ -126,10 +126,10 @@ final class RunController {
                 } catch (InterruptedException e) {
                     Thread.currentThread().interrupt();
                 } catch (ExecutionException e) {
-                    parts.rig().connected(false, List.of("Could not connect: " + e.getCause().getMessage(),
+                    parts.rig().connected(false, List.of("Could not connect: " + PlainWords.of(e.getCause().getMessage()),
                             "Check the settings above and press Connect again."));
                     parts.status().rig("not connected");
-                    parts.status().message("Could not connect: " + e.getCause().getMessage());
+                    parts.status().message("Could not connect: " + PlainWords.of(e.getCause().getMessage()));
                 }
                 updateButtons();
             }
@@ -330,8 +330,8 @@ final class RunController {
                     Thread.currentThread().interrupt();
                 } catch (ExecutionException e) {
                     parts.run().progress(0, "could not start");
-                    parts.status().message("The sweep could not run; nothing was excited: " + e.getCause().getMessage());
-                    results.withdraw(sweepWords() + " could not run (" + e.getCause().getMessage() + ")");
+                    parts.status().message("The sweep could not run; nothing was excited: " + PlainWords.of(e.getCause().getMessage()));
+                    results.withdraw(sweepWords() + " could not run (" + PlainWords.of(e.getCause().getMessage()) + ")");
                 }
                 updateButtons();
             }
@@ -376,8 +376,8 @@ final class RunController {
                 } catch (InterruptedException e) {
                     Thread.currentThread().interrupt();
                 } catch (ExecutionException e) {
-                    parts.status().message("Could not fit " + source + ": " + e.getCause().getMessage());
-                    results.withdraw(source + " could not be fitted (" + e.getCause().getMessage() + ")");
+                    parts.status().message("Could not fit " + source + ": " + PlainWords.of(e.getCause().getMessage()));
+                    results.withdraw(source + " could not be fitted (" + PlainWords.of(e.getCause().getMessage()) + ")");
                 }
             }
         }.execute();

@@ -38,7 +38,7 @@ public final class LotRows {
             return Figure.labelFor(f.key()) + ": one qualification so far; control limits need two or more";
         }
         List<Integer> out = f.chart().outOfControl();
-        return String.format(Locale.ROOT, "%s: centre %s, control limits %s .. %s (mean +/- 3 MR-bar/1.128); %s", Figure.labelFor(f.key()),
+        return String.format(Locale.ROOT, "%s: centre %s, control limits %s .. %s (mean ± 3 MR-bar/1.128); %s", Figure.labelFor(f.key()),
                 number(f.chart().centre()), number(f.chart().lowerControlLimit()), number(f.chart().upperControlLimit()),
                 out.isEmpty() ? "all " + f.n() + " points inside" : out.size() + " point(s) outside: number "
                         + out.stream().map(i -> Integer.toString(i + 1)).reduce((a, b) -> a + ", " + b).orElse(""));

@@ -7,6 +7,7 @@ import org.tautline.analysis.verdict.Figure;
 import org.tautline.analysis.verdict.LimitResult;
 import org.tautline.analysis.verdict.Measurement;
 import org.tautline.app.qualify.QualificationResult;
+import org.tautline.app.ui.PlainWords;
 
 /** The properties and verdict of a result as plain text rows, every figure named for people. Free of Swing. */
 final class PropertyLines {
@@ -67,7 +68,7 @@ final class PropertyLines {
         String label = labelOf(r);
         if (!Double.isFinite(r.measuredValue())) {
             int colon = r.reason().indexOf(": ");
-            return label + ": not measured" + (colon < 0 ? "" : r.reason().substring(colon));
+            return label + ": not measured" + (colon < 0 ? "" : PlainWords.of(r.reason().substring(colon)));
         }
         String unit = unitOf(r);
         String value = r.standardUncertainty() > 0
@@ -96,8 +97,8 @@ final class PropertyLines {
             lines.addAll(wholeResultReasons(result));
             v.results().forEach(r -> lines.add(reasonOf(r)));
         });
-        lines.addAll(result.modal().warnings());
-        result.tension().ifPresent(t -> lines.addAll(t.warnings()));
+        result.modal().warnings().forEach(w -> lines.add(PlainWords.of(w)));
+        result.tension().ifPresent(t -> t.warnings().forEach(w -> lines.add(PlainWords.of(w))));
         return lines;
     }
 
@@ -110,7 +111,7 @@ final class PropertyLines {
         List<String> lines = new ArrayList<>();
         result.verdict().ifPresent(v -> {
             List<String> perLimit = v.results().stream().map(LimitResult::reason).toList();
-            v.reasons().stream().filter(s -> !perLimit.contains(s)).forEach(lines::add);
+            v.reasons().stream().filter(s -> !perLimit.contains(s)).map(PlainWords::of).forEach(lines::add);
         });
         return lines;
     }

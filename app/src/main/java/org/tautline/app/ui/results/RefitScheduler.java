@@ -59,7 +59,8 @@ final class RefitScheduler {
                     listener.idle();
                 } catch (ExecutionException e) {
                     Throwable cause = e.getCause() == null ? e : e.getCause();
-                    listener.failed("the refit with " + selection.size() + " poles failed: " + cause.getMessage());
+                    listener.failed("the refit with " + selection.size() + " poles failed: "
+                            + org.tautline.app.ui.PlainWords.of(cause.getMessage()));
                 }
             }
         };

@@ -42,7 +42,7 @@ class LotRowsTest {
         // the moving ranges are 0, 0, 0, 4, MR-bar = 1, mean 10.8, limits 10.8 +/- 2.6596 = 8.1404 .. 13.4596.
         FigureStatistics f = FigureStatistics.of("f1Hz", "Hz", List.of(10.0, 10.0, 10.0, 10.0, 14.0), Double.NaN,
                 Double.NaN);
-        assertEquals("fundamental frequency: centre 10.8000, control limits 8.14043 .. 13.4596 (mean +/- 3 MR-bar/1.128); 1 point(s)"
+        assertEquals("fundamental frequency: centre 10.8000, control limits 8.14043 .. 13.4596 (mean ± 3 MR-bar/1.128); 1 point(s)"
                 + " outside: number 5", LotRows.chartSummary(f));
         assertEquals("fundamental frequency: one qualification so far; control limits need two or more",
                 LotRows.chartSummary(FigureStatistics.of("f1Hz", "Hz", List.of(10.0), Double.NaN, Double.NaN)));
