@@ -168,7 +168,8 @@ public final class Lscf {
      *
      * @param order denominator degree n, 1 .. maxOrder
      * @return the poles with Im(lambda) &gt; 0; at most n/2 of them
-     * @throws AnalysisException if the order is out of range or the normal equations are singular
+     * @throws AnalysisException if the order is out of range, the normal equations are singular or the roots of the
+     *     denominator cannot be computed
      */
     public List<Pole> poles(int order) {
         if (order < 1 || order > sums.maxOrder()) {
@@ -179,8 +180,15 @@ public final class Lscf {
         if (denominator == null) {
             return List.of();
         }
+        List<Complex> roots;
+        try {
+            roots = LscfRoots.ofMonic(denominator);
+        } catch (AnalysisException e) {
+            throw new AnalysisException("LSCF of order " + order + " on the " + lineCount + " lines of the band "
+                    + bandLowHz + " .. " + bandHighHz + " Hz has no poles: " + e.getMessage(), e);
+        }
         List<Pole> poles = new ArrayList<>();
-        for (Complex root : LscfRoots.ofMonic(denominator)) {
+        for (Complex root : roots) {
             Complex lambda = LscfZDomain.lambdaOf(root, samplingIntervalS);
             if (lambda.getImaginary() > 0 && Double.isFinite(lambda.getReal()) && Double.isFinite(lambda.getImaginary())) {
                 poles.add(new Pole(lambda.getReal(), lambda.getImaginary()));

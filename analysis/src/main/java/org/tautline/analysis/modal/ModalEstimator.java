@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Optional;
 
 import org.hipparchus.complex.Complex;
+import org.hipparchus.exception.MathRuntimeException;
 import org.tautline.analysis.AnalysisException;
 import org.tautline.analysis.frf.Frf;
 import org.tautline.analysis.frf.FrfQuantity;
@@ -36,6 +37,8 @@ public final class ModalEstimator {
     /** Fewest lines in the band that a fit accepts. */
     public static final int MIN_LINES = 12;
     private static final int MIN_ORDER = 2;
+    /** Skipped chart orders are worth a warning when they are more than a quarter of those tried. */
+    private static final int SKIPPED_ORDERS_THAT_MATTER = 4;
     private static final int ORDER_STEP = 2;
 
     private final double bandLowHz;
@@ -81,7 +84,14 @@ public final class ModalEstimator {
      * @throws AnalysisException when the data cannot support a fit: too few lines in the band, a zero response
      */
     public ModalEstimate estimate(Frf frf) {
-        Frf h = frf.toQuantity(FrfQuantity.RECEPTANCE);
+        try {
+            return estimateReceptance(frf.toQuantity(FrfQuantity.RECEPTANCE));
+        } catch (MathRuntimeException e) {
+            throw failed(e);
+        }
+    }
+
+    private ModalEstimate estimateReceptance(Frf h) {
         double low = Math.max(bandLowHz, h.frequencyHz(0));
         double high = Math.min(bandHighHz, h.frequencyHz(h.size() - 1));
         int lines = linesIn(h, low, high);
@@ -99,6 +109,15 @@ public final class ModalEstimator {
     }
 
     /**
+     * A numerical library failure (an iteration that did not converge, a singular matrix) as a plain analysis error,
+     * so no library exception escapes a fit.
+     */
+    private static AnalysisException failed(MathRuntimeException e) {
+        return new AnalysisException("the modal fit failed: a numerical step did not converge or met a singular matrix ("
+                + e.getMessage() + "); try a narrower band or a cleaner measurement", e);
+    }
+
+    /**
      * Fits the FRF with an edited pole choice (poles added or dropped by hand).
      *
      * @param frf the measured FRF
@@ -108,7 +127,11 @@ public final class ModalEstimator {
      */
     public ModalEstimate refit(Frf frf, ModeSelection selection, StabilisationChart chart) {
         Frf h = frf.toQuantity(FrfQuantity.RECEPTANCE);
-        return fit(h, selection, chart, chart.bandLowHz(), chart.bandHighHz());
+        try {
+            return fit(h, selection, chart, chart.bandLowHz(), chart.bandHighHz());
+        } catch (MathRuntimeException e) {
+            throw failed(e);
+        }
     }
 
     private ModalEstimate fit(Frf h, ModeSelection selection, StabilisationChart chart, double low, double high) {
@@ -118,6 +141,12 @@ public final class ModalEstimator {
                     selection, low, high, List.of());
         }
         List<String> warnings = new ArrayList<>();
+        int asked = chart.orders().size() + chart.skippedOrders().size();
+        if (SKIPPED_ORDERS_THAT_MATTER * chart.skippedOrders().size() > asked) {
+            warnings.add(String.format(java.util.Locale.ROOT, "the resonances of %d of the %d model orders tried could"
+                    + " not be computed, so the choice of modes rests on fewer orders than usual",
+                    chart.skippedOrders().size(), asked));
+        }
         LsfdResult start = Lsfd.fit(h, poles, lsfdOptions(h, low, high, false));
         boolean weighted = h.variance().isPresent();
         ModalRefinementOptions refine = ModalRefinementOptions.of(lsfdOptions(h, low, high, weighted));

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.SortedMap;
 import java.util.TreeMap;
+import java.util.function.IntFunction;
 
 import org.hipparchus.complex.Complex;
 import org.tautline.analysis.AnalysisException;
@@ -20,7 +21,10 @@ import org.tautline.analysis.AnalysisException;
  * frequency it is {@link StabilityClass#FREQUENCY}, within 5 % in damping ratio as well it is
  * {@link StabilityClass#DAMPING}, and with a {@link ResidueEstimator} also within 5 % in modal
  * constant it is {@link StabilityClass#STABLE} (thresholds: common practice, see
- * {@link StabilityClass}). Without a residue estimator DAMPING is the top class. Immutable.
+ * {@link StabilityClass}). Without a residue estimator DAMPING is the top class. An order whose poles
+ * cannot be computed (singular normal equations, a root search that does not converge) is left out
+ * of the chart and listed in {@link #skippedOrders()}; the next order is then compared with the last
+ * order that has poles. Immutable.
  */
 public final class StabilisationChart {
     /** Relative frequency agreement for {@link StabilityClass#FREQUENCY}: 1 %. */
@@ -55,14 +59,16 @@ public final class StabilisationChart {
     private final List<Integer> orders;
     private final List<StabilisationPoint> points;
     private final StabilityClass topClass;
+    private final List<Integer> skippedOrders;
 
     private StabilisationChart(double bandLowHz, double bandHighHz, List<Integer> orders,
-                               List<StabilisationPoint> points, StabilityClass topClass) {
+                               List<StabilisationPoint> points, StabilityClass topClass, List<Integer> skippedOrders) {
         this.bandLowHz = bandLowHz;
         this.bandHighHz = bandHighHz;
         this.orders = orders;
         this.points = points;
         this.topClass = topClass;
+        this.skippedOrders = skippedOrders;
     }
 
     /**
@@ -85,11 +91,43 @@ public final class StabilisationChart {
                     + lscf.maxOrder() + " (the estimator's maxOrder) with orderStep >= 1, got minOrder " + minOrder
                     + ", maxOrder " + maxOrder + ", orderStep " + orderStep);
         }
+        return build(lscf.bandLowHz(), lscf.bandHighHz(), minOrder, maxOrder, orderStep, lscf::poles, residuesOrNull);
+    }
+
+    /**
+     * Runs a pole estimator at orders minOrder, minOrder + step, ... up to maxOrder and classifies the poles; an
+     * order whose poles cannot be computed is skipped.
+     *
+     * @param bandLowHz lower edge of the band, Hz
+     * @param bandHighHz upper edge of the band, Hz
+     * @param minOrder the lowest order
+     * @param maxOrder the highest order
+     * @param orderStep the order increment
+     * @param polesOfOrder the poles of one order; throws {@link AnalysisException} when they cannot be computed
+     * @param residuesOrNull residue estimator for the modal-constant criterion, or null to skip it
+     * @return the chart
+     * @throws AnalysisException when no order has poles that can be computed
+     */
+    static StabilisationChart build(double bandLowHz, double bandHighHz, int minOrder, int maxOrder, int orderStep,
+                                    IntFunction<List<Pole>> polesOfOrder, ResidueEstimator residuesOrNull) {
         SortedMap<Integer, List<Pole>> poles = new TreeMap<>();
+        List<Integer> skipped = new ArrayList<>();
+        AnalysisException first = null;
         for (int order = minOrder; order <= maxOrder; order += orderStep) {
-            poles.put(order, lscf.poles(order));
+            try {
+                poles.put(order, polesOfOrder.apply(order));
+            } catch (AnalysisException e) {
+                skipped.add(order);
+                first = first == null ? e : first;
+            }
         }
-        return classify(lscf.bandLowHz(), lscf.bandHighHz(), poles, residuesOrNull);
+        if (poles.isEmpty()) {
+            throw new AnalysisException("no model order from " + minOrder + " to " + maxOrder + " gave poles that could"
+                    + " be computed; the first failure: " + first.getMessage(), first);
+        }
+        StabilisationChart chart = classify(bandLowHz, bandHighHz, poles, residuesOrNull);
+        return new StabilisationChart(chart.bandLowHz, chart.bandHighHz, chart.orders, chart.points, chart.topClass,
+                List.copyOf(skipped));
     }
 
     /**
@@ -133,7 +171,7 @@ public final class StabilisationChart {
         }
         return new StabilisationChart(bandLowHz, bandHighHz, List.copyOf(polesByOrder.keySet()),
                 Collections.unmodifiableList(points),
-                residuesOrNull == null ? StabilityClass.DAMPING : StabilityClass.STABLE);
+                residuesOrNull == null ? StabilityClass.DAMPING : StabilityClass.STABLE, List.of());
     }
 
     private static Complex[] modalConstants(ResidueEstimator estimator, List<Pole> poles, int order) {
@@ -206,6 +244,11 @@ public final class StabilisationChart {
      */
     public List<StabilisationPoint> pointsAt(int order) {
         return points.stream().filter(p -> p.order() == order).toList();
+    }
+
+    /** @return the orders that were asked for but left out because their poles could not be computed, increasing */
+    public List<Integer> skippedOrders() {
+        return skippedOrders;
     }
 
     /** @return the strictest class this chart can give: STABLE with a residue estimator, else DAMPING */
