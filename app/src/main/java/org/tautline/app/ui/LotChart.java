@@ -71,7 +71,7 @@ final class LotChart {
         marker(f.chart().upperControlLimit(), "UCL", Palette.SECOND, true);
         marker(f.lowerLimit(), "lower spec", Palette.FIT, false);
         marker(f.upperLimit(), "upper spec", Palette.FIT, false);
-        chart.setTitle("Control chart of " + Figure.labelFor(f.key()) + " (individuals, " + f.n() + " qualifications)");
+        chart.setTitle("Control chart of " + Figure.labelFor(f.key()) + " (individuals, " + f.n() + (f.n() == 1 ? " qualification)" : " qualifications)"));
         double[] range = valueRange(f);
         plot.getRangeAxis().setRange(range[0], range[1]);
         plot.getDomainAxis().setRange(0.5, Math.max(f.n(), 2) + 0.5);

@@ -166,6 +166,7 @@ final class LotScreen {
         statistics = List.copyOf(lotStatistics);
         table.setRowCount(0);
         LotRows.of(statistics).forEach(table::addRow);
+        org.tautline.app.ui.results.ColumnWidths.fitToContent(figures);
         if (statistics.isEmpty()) {
             message.setText("Lot " + lot.getText().strip() + " has no qualifications in this register yet.");
             return;

@@ -122,7 +122,7 @@ final class RunController {
                     connectedDriver = driver;
                     parts.rig().connected(true, RigConnection.health(rig));
                     parts.status().rig("connected: " + driver + ", excitation off");
-                    parts.status().message("Connected to " + rig.identity());
+                    parts.status().message("Connected to " + PlainWords.of(rig.identity()));
                 } catch (InterruptedException e) {
                     Thread.currentThread().interrupt();
                 } catch (ExecutionException e) {

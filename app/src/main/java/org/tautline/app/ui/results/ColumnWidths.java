@@ -7,7 +7,7 @@ import javax.swing.table.TableCellRenderer;
 import javax.swing.table.TableColumn;
 
 /** Sizes a table's columns to their widest cell or heading, so that nothing is cut off with "...". */
-final class ColumnWidths {
+public final class ColumnWidths {
     /** Room either side of the text, pixels. */
     private static final int PADDING = 16;
 
@@ -20,7 +20,7 @@ final class ColumnWidths {
      *
      * @param table the table
      */
-    static void fitToContent(JTable table) {
+    public static void fitToContent(JTable table) {
         for (int c = 0; c < table.getColumnCount(); c++) {
             int width = contentWidth(table, c);
             TableColumn column = table.getColumnModel().getColumn(c);

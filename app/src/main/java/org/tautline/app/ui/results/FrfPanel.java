@@ -124,7 +124,7 @@ final class FrfPanel {
         } else if (h.quality().isPresent()) {
             figure = h.quality().get();
             figureName = "sine-fit residual / RMS";
-            lineAxis.setLabel("Sine-fit residual / RMS");
+            lineAxis.setLabel("Fit residual");
             lineAxis.setAutoRange(true);
         } else {
             figure = new double[0];

@@ -45,7 +45,9 @@ final class ResultHeader {
         banner.add(headline);
         banner.add(reason, "wmin 0");
         component.add(banner);
-        component.add(run);
+        // The run line may be longer than the window: it is cut with an ellipsis (the whole of it in the tooltip) so that
+        // it does not widen the column the wrapped notes are laid out in.
+        component.add(run, "wmin 0");
         component.add(staleNote, "wmin 0");
         staleNote.setVisible(false);
         fonts();
@@ -61,6 +63,7 @@ final class ResultHeader {
         summary = VerdictSummary.of(result);
         run.setText("Specimen " + result.specimen().id() + "     " + capitalised(origin.how()) + " " + origin.when()
                 + "     Rig " + origin.rig());
+        run.setToolTipText(run.getText());
         staleNote.setVisible(false);
         paint(VerdictColours.of(summary.outcome()), summary.headline(), summary.firstReason());
         component.setVisible(true);

@@ -22,7 +22,7 @@ public record ResultOrigin(Instant madeAt, String how, String rig) {
      * @return the origin of a sweep run in the workbench
      */
     public static ResultOrigin sweep(Instant startedAt, String driver, String identity) {
-        return new ResultOrigin(startedAt, "sweep started", driver + ": " + identity);
+        return new ResultOrigin(startedAt, "sweep started", driver + ": " + org.tautline.app.ui.PlainWords.of(identity));
     }
 
     /**
