@@ -1,7 +1,5 @@
 package org.tautline.analysis.verdict;
 
-import java.math.BigDecimal;
-import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -29,8 +27,9 @@ import org.tautline.analysis.AnalysisException;
  *
  * @param outcome the overall outcome
  * @param results one result per limit, in the specification's order
- * @param reasons plain sentences: first why no verdict could be reached, when that is so (see
- *        {@link #undetermined(String)}), then one per limit in the order of {@code results}
+ * @param reasons plain sentences for people: first why no verdict could be reached, when that is so (see
+ *        {@link #undetermined(String)}), then one per limit in the order of {@code results}, each naming its figure
+ *        by its label and rounding the value to its expanded uncertainty ({@link LimitText})
  */
 public record Verdict(Outcome outcome, List<LimitResult> results, List<String> reasons) {
 
@@ -112,54 +111,20 @@ public record Verdict(Outcome outcome, List<LimitResult> results, List<String> r
     }
 
     private static LimitResult check(Limit limit, Measurement measurement, String whyNotMeasured) {
-        String key = limit.figureKey();
         if (measurement == null) {
             return new LimitResult(limit, Double.NaN, Double.NaN, Double.NaN, Outcome.NOT_DETERMINABLE,
-                    "no measured value for " + key + (whyNotMeasured == null ? "" : ": " + whyNotMeasured));
+                    LimitText.notMeasured(limit.figureKey(), whyNotMeasured));
         }
         double v = measurement.value();
         double u = measurement.standardUncertainty();
         if (!measurement.unit().equals(limit.unit())) {
             return new LimitResult(limit, v, u, Double.NaN, Outcome.NOT_DETERMINABLE,
-                    key + " was measured in '" + measurement.unit() + "' but the limit '" + limit.name()
-                            + "' is in '" + limit.unit() + "'");
+                    LimitText.unitMismatch(limit, measurement.unit()));
         }
         double expanded = COVERAGE_FACTOR * u;
         double margin = limit.marginOf(v);
-        String unit = withUnit("", limit.unit());
-        String stated = u == 0 ? key + " = " + number(v) + unit
-                : key + " = " + number(v) + " ± " + number(expanded) + unit + " (k = 2)";
-        String range = range(limit);
-        String marginText = " (margin " + number(margin) + unit + ")";
-        if (margin >= expanded) {
-            return new LimitResult(limit, v, u, margin, Outcome.PASS, stated + " meets " + range + marginText);
-        }
-        if (margin < -expanded) {
-            return new LimitResult(limit, v, u, margin, Outcome.FAIL, stated + " does not meet " + range + marginText);
-        }
-        return new LimitResult(limit, v, u, margin, Outcome.NOT_DETERMINABLE,
-                stated + " cannot be judged against " + range + marginText + ": the uncertainty is too large to decide");
-    }
-
-    private static String range(Limit limit) {
-        if (limit.hasLowerBound() && limit.hasUpperBound()) {
-            return number(limit.lowerBound()) + " .. " + withUnit(number(limit.upperBound()), limit.unit());
-        }
-        if (limit.hasLowerBound()) {
-            return "at least " + withUnit(number(limit.lowerBound()), limit.unit());
-        }
-        return "at most " + withUnit(number(limit.upperBound()), limit.unit());
-    }
-
-    private static String withUnit(String text, String unit) {
-        return unit.isEmpty() ? text : text + " " + unit;
-    }
-
-    /** Six significant digits, trailing zeros dropped, never exponent notation: 151.2, 8.8, 140. */
-    static String number(double value) {
-        if (value == 0) {
-            return "0";
-        }
-        return new BigDecimal(value).round(new MathContext(6)).stripTrailingZeros().toPlainString();
+        Outcome outcome = margin >= expanded ? Outcome.PASS : margin < -expanded ? Outcome.FAIL : Outcome.NOT_DETERMINABLE;
+        return new LimitResult(limit, v, u, margin, outcome,
+                LimitText.judged(limit, v, u, margin, outcome, LimitText.UNICODE));
     }
 }

@@ -11,6 +11,8 @@ import java.util.concurrent.Callable;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.tautline.analysis.AnalysisException;
+import org.tautline.analysis.format.QuantityFormat;
+import org.tautline.analysis.format.Rounded;
 import org.tautline.analysis.frf.Frf;
 import org.tautline.analysis.frf.FrfCsvReader;
 import org.tautline.analysis.modal.FittedMode;
@@ -19,19 +21,17 @@ import org.tautline.analysis.modal.ModalEstimator;
 import org.tautline.analysis.specimen.LinearityResult;
 import org.tautline.analysis.specimen.Specimen;
 import org.tautline.analysis.verdict.Specification;
-import org.tautline.app.format.QuantityFormat;
-import org.tautline.app.format.Rounded;
 import org.tautline.app.qualify.Qualification;
 import org.tautline.app.qualify.QualificationResult;
-import org.tautline.app.report.LevelCheckFile;
-import org.tautline.app.report.RunDirectory;
 import org.tautline.app.qualify.ResultText;
 import org.tautline.app.qualify.SpecificationFile;
 import org.tautline.app.qualify.SpecimenFile;
+import org.tautline.app.report.LevelCheckFile;
+import org.tautline.app.report.RunDirectory;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
-import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code tautline fit}: the modal model of an FRF file, and with a specimen its physics and verdict. */
 @Command(name = "fit", mixinStandardHelpOptions = true,

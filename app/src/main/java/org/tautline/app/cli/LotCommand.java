@@ -12,8 +12,8 @@ import java.util.concurrent.Callable;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.tautline.analysis.AnalysisException;
+import org.tautline.analysis.format.QuantityFormat;
 import org.tautline.analysis.verdict.Figure;
-import org.tautline.app.format.QuantityFormat;
 import org.tautline.app.lot.FigureStatistics;
 import org.tautline.app.lot.LotEntries;
 import org.tautline.app.lot.LotEntry;
@@ -21,10 +21,10 @@ import org.tautline.app.lot.LotRegister;
 import org.tautline.app.lot.LotStatistics;
 import org.tautline.app.report.RunDirectory;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
-import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code tautline lot}: per-figure statistics of a lot from the register; {@code --add} appends a run first. */
 @Command(name = "lot", mixinStandardHelpOptions = true,

@@ -9,9 +9,9 @@ import java.util.Map;
 
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import org.tautline.analysis.format.QuantityFormat;
 import org.tautline.analysis.frf.FrfCsvWriter;
 import org.tautline.analysis.modal.FittedMode;
-import org.tautline.app.format.QuantityFormat;
 import org.tautline.driver.journal.JournalHeader;
 import org.tautline.driver.journal.JournalReader;
 import org.tautline.driver.sweep.LevelMode;

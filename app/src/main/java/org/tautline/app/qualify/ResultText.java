@@ -3,6 +3,8 @@ package org.tautline.app.qualify;
 import java.util.Locale;
 import java.util.Optional;
 
+import org.tautline.analysis.format.QuantityFormat;
+import org.tautline.analysis.format.Rounded;
 import org.tautline.analysis.modal.FittedMode;
 import org.tautline.analysis.modal.Mode;
 import org.tautline.analysis.qualify.QualifiedMode;
@@ -10,11 +12,8 @@ import org.tautline.analysis.specimen.AbsentHarmonic;
 import org.tautline.analysis.specimen.PatternFit;
 import org.tautline.analysis.specimen.Specimen;
 import org.tautline.analysis.specimen.TensionEstimate;
-import org.tautline.analysis.verdict.Figure;
 import org.tautline.analysis.verdict.LimitResult;
-import org.tautline.app.format.LimitText;
-import org.tautline.app.format.QuantityFormat;
-import org.tautline.app.format.Rounded;
+import org.tautline.analysis.verdict.LimitText;
 import org.tautline.driver.sim.SimulationTruth;
 import org.tautline.driver.sim.TrueMode;
 
@@ -78,8 +77,8 @@ public final class ResultText {
         r.verdict().ifPresent(verdict -> {
             out.append(String.format(Locale.ROOT, "%nVerdict: %s%n", verdict.outcome().label().toUpperCase(Locale.ROOT)));
             for (LimitResult limit : verdict.results()) {
-                out.append("  ").append(Figure.labelFor(limit.limit().figureKey())).append(", ")
-                        .append(limit.outcome().label()).append(": ").append(LimitText.reason(limit, f)).append('\n');
+                out.append("  ").append(limit.outcome().label()).append(": ").append(LimitText.reason(limit, f))
+                        .append('\n');
             }
         });
         r.sweep().ifPresent(sweep -> out.append(String.format(Locale.ROOT, "%nRig time %s, wall time %s, %d steps%s%n",

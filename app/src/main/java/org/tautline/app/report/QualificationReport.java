@@ -8,13 +8,12 @@ import java.util.Optional;
 
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDDocumentInformation;
-import org.tautline.analysis.verdict.Figure;
 import org.tautline.analysis.verdict.LimitResult;
+import org.tautline.analysis.verdict.LimitText;
 import org.tautline.analysis.verdict.Outcome;
 import org.tautline.analysis.verdict.Specification;
 import org.tautline.analysis.verdict.Verdict;
 import org.tautline.app.SafetyNotice;
-import org.tautline.app.format.LimitText;
 import org.tautline.app.lot.FigureStatistics;
 import org.tautline.app.qualify.QualificationResult;
 
@@ -131,8 +130,7 @@ public final class QualificationReport {
                     LIMIT_COLUMNS, false);
         }
         s.gap(3);
-        v.results().forEach(l -> s.line(Figure.labelFor(l.limit().figureKey()) + ", " + l.outcome().label() + ": "
-                + LimitText.reason(l, ReportText.FORMAT), 8));
+        v.results().forEach(l -> s.line(l.outcome().label() + ": " + LimitText.reason(l, ReportText.FORMAT), 8));
         s.gap(3);
         Outcome outcome = v.outcome();
         s.boldLine("Verdict: " + outcome.label().toUpperCase(java.util.Locale.ROOT), 13, colour(outcome));

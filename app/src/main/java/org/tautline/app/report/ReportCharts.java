@@ -4,17 +4,17 @@ import java.awt.Color;
 import java.util.List;
 import java.util.Optional;
 
+import org.tautline.analysis.format.QuantityFormat;
+import org.tautline.analysis.format.TextStyle;
 import org.tautline.analysis.frf.Frf;
 import org.tautline.analysis.qualify.QualifiedMode;
 import org.tautline.analysis.specimen.EndCondition;
-import org.tautline.analysis.specimen.Specimen;
-import org.tautline.analysis.specimen.TensionEstimate;
 import org.tautline.analysis.specimen.ParticipationEntry;
 import org.tautline.analysis.specimen.PatternFit;
+import org.tautline.analysis.specimen.Specimen;
+import org.tautline.analysis.specimen.TensionEstimate;
 import org.tautline.analysis.verdict.Figure;
 import org.tautline.app.lot.IndividualsChart;
-import org.tautline.app.format.QuantityFormat;
-import org.tautline.app.format.TextStyle;
 import org.tautline.app.qualify.QualificationResult;
 
 /** The report's charts, in colours of the Okabe-Ito palette (Okabe and Ito, Color Universal Design, 2008). */

@@ -4,10 +4,10 @@ import java.time.Instant;
 import java.time.ZoneOffset;
 import java.time.format.DateTimeFormatter;
 
+import org.tautline.analysis.format.QuantityFormat;
+import org.tautline.analysis.format.Rounded;
+import org.tautline.analysis.format.TextStyle;
 import org.tautline.analysis.verdict.Figure;
-import org.tautline.app.format.QuantityFormat;
-import org.tautline.app.format.Rounded;
-import org.tautline.app.format.TextStyle;
 
 /** How the report writes numbers, dates and missing facts: one format for every page (GUM 7.2.6 rounding). */
 final class ReportText {

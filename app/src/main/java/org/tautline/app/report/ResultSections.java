@@ -3,6 +3,7 @@ package org.tautline.app.report;
 import java.util.Locale;
 import java.util.Map;
 
+import org.tautline.analysis.format.QuantityFormat;
 import org.tautline.analysis.modal.FittedMode;
 import org.tautline.analysis.modal.Mode;
 import org.tautline.analysis.qualify.QualifiedMode;
@@ -11,7 +12,6 @@ import org.tautline.analysis.specimen.Specimen;
 import org.tautline.analysis.specimen.TensionEstimate;
 import org.tautline.analysis.verdict.Figure;
 import org.tautline.analysis.verdict.Measurement;
-import org.tautline.app.format.QuantityFormat;
 import org.tautline.app.qualify.QualificationResult;
 
 /** The report's sections on the specimen, the rig record, the modes, the properties and every figure. */

@@ -7,7 +7,10 @@ import org.tautline.analysis.modal.FittedMode;
 import org.tautline.analysis.qualify.QualifiedMode;
 import org.tautline.app.qualify.QualificationResult;
 
-/** The rows of the mode table: one per fitted mode, in frequency order. Free of Swing. */
+/**
+ * The rows of the mode table: one per fitted mode, in frequency order, values with their standard uncertainties
+ * rounded together ({@link PropertyLines#shown}). Free of Swing.
+ */
 final class ModeRows {
     /** Column titles. */
     static final List<String> COLUMNS = List.of("Harmonic n", "Polarisation", "Natural frequency (Hz)",
@@ -61,11 +64,11 @@ final class ModeRows {
         };
         double re = f.mode().modalConstant().getReal();
         double im = f.mode().modalConstant().getImaginary();
-        String constant = Figures.plusMinus(re, f.modalConstantStd().getReal());
+        String constant = PropertyLines.shown(re, f.modalConstantStd().getReal(), "");
         if (Math.abs(im) > 1e-6 * Math.abs(re)) {
-            constant += " + j (" + Figures.plusMinus(im, f.modalConstantStd().getImaginary()) + ")";
+            constant += " + j (" + PropertyLines.shown(im, f.modalConstantStd().getImaginary(), "") + ")";
         }
-        return new Row(harmonic, polarisation, Figures.plusMinus(f.mode().frequencyHz(), f.frequencyStdHz()),
-                Figures.plusMinus(f.mode().dampingRatio(), f.dampingRatioStd()), constant);
+        return new Row(harmonic, polarisation, PropertyLines.shown(f.mode().frequencyHz(), f.frequencyStdHz(), ""),
+                PropertyLines.shown(f.mode().dampingRatio(), f.dampingRatioStd(), ""), constant);
     }
 }

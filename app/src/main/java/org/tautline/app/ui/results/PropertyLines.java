@@ -3,19 +3,40 @@ package org.tautline.app.ui.results;
 import java.util.ArrayList;
 import java.util.List;
 
+import org.tautline.analysis.format.QuantityFormat;
+import org.tautline.analysis.format.TextStyle;
 import org.tautline.analysis.verdict.Figure;
 import org.tautline.analysis.verdict.LimitResult;
+import org.tautline.analysis.verdict.LimitText;
 import org.tautline.analysis.verdict.Measurement;
 import org.tautline.app.qualify.QualificationResult;
 import org.tautline.app.ui.PlainWords;
 
-/** The properties and verdict of a result as plain text rows, every figure named for people. Free of Swing. */
+/**
+ * The properties and verdict of a result as plain text rows, every figure named for people and every value written by
+ * the shared {@link QuantityFormat} (GUM 7.2.6 rounding, one ±, Unicode units). Free of Swing.
+ */
 final class PropertyLines {
     /** Verdict table column titles. */
     static final List<String> VERDICT_COLUMNS = List.of("Figure", "Limits", "Measured ± standard uncertainty",
             "Margin to the nearest limit", "Result");
+    /** How the window writes numbers: every symbol in Unicode. */
+    static final QuantityFormat FORMAT = new QuantityFormat(TextStyle.UNICODE);
 
     private PropertyLines() {
+    }
+
+    /**
+     * A value with its standard uncertainty as the window shows it.
+     *
+     * @param value the value; NaN when not determined
+     * @param u its standard uncertainty; NaN when not evaluated, 0 for a figure judged as it stands
+     * @param unit the unit in the ASCII form figures use ({@code "N m^2"}), empty for none
+     * @return the value and uncertainty rounded together (GUM 7.2.6); the value alone when the uncertainty is zero, so
+     *         no "± 0" stands where no uncertainty was evaluated
+     */
+    static String shown(double value, double u, String unit) {
+        return u == 0 ? FORMAT.value(value, unit) : FORMAT.withUncertainty(value, u, unit);
     }
 
     /**
@@ -25,19 +46,19 @@ final class PropertyLines {
     static List<String[]> properties(QualificationResult result) {
         List<String[]> rows = new ArrayList<>();
         result.tension().ifPresentOrElse(t -> {
-            rows.add(new String[] {"Tension", Figures.plusMinus(t.tensionN(), t.tensionStdN(), "N")});
-            rows.add(new String[] {"Bending stiffness EI", Figures.plusMinus(t.bendingStiffnessNm2(),
-                    t.bendingStiffnessStdNm2(), Figure.unitLabel(Figure.BENDING_STIFFNESS.unit()))});
+            rows.add(new String[] {"Tension", shown(t.tensionN(), t.tensionStdN(), Figure.TENSION.unit())});
+            rows.add(new String[] {"Bending stiffness EI", shown(t.bendingStiffnessNm2(), t.bendingStiffnessStdNm2(),
+                    Figure.BENDING_STIFFNESS.unit())});
             Measurement b = result.measurements().get(Figure.INHARMONICITY.key());
-            rows.add(new String[] {"Inharmonicity B", b == null ? Figures.plain(t.inharmonicityB())
-                    : Figures.plusMinus(b.value(), b.standardUncertainty())});
+            rows.add(new String[] {"Inharmonicity B", b == null ? FORMAT.number(t.inharmonicityB())
+                    : shown(b.value(), b.standardUncertainty(), "")});
             rows.add(new String[] {"Tension found by", t.method().label()});
         }, () -> rows.add(new String[] {"Tension", "not estimated: no harmonic was numbered"}));
         result.participation().ifPresent(p -> {
-            rows.add(new String[] {"Stinger position", Figures.plusMinus(p.forcingPositionM(), p.forcingPositionStdM(), "m")
-                    + " (stated " + Figures.plain(result.specimen().forcingPositionM()) + " m)"});
-            rows.add(new String[] {"Sensor position", Figures.plusMinus(p.sensorPositionM(), p.sensorPositionStdM(), "m")
-                    + " (stated " + Figures.plain(result.specimen().sensorPositionM()) + " m)"});
+            rows.add(new String[] {"Stinger position", shown(p.forcingPositionM(), p.forcingPositionStdM(), "m")
+                    + " (stated " + FORMAT.value(result.specimen().forcingPositionM(), "m") + ")"});
+            rows.add(new String[] {"Sensor position", shown(p.sensorPositionM(), p.sensorPositionStdM(), "m")
+                    + " (stated " + FORMAT.value(result.specimen().sensorPositionM(), "m") + ")"});
         });
         return rows;
     }
@@ -50,9 +71,9 @@ final class PropertyLines {
         List<String[]> rows = new ArrayList<>();
         result.verdict().ifPresent(v -> {
             for (LimitResult r : v.results()) {
-                String unit = unitOf(r);
-                rows.add(new String[] {labelOf(r), bounds(r), Figures.plusMinus(r.measuredValue(), r.standardUncertainty(),
-                    unit), Double.isFinite(r.margin()) ? withUnit(Figures.plain(r.margin()), unit) : "-",
+                String unit = r.limit().unit();
+                rows.add(new String[] {labelOf(r), bounds(r), shown(r.measuredValue(), r.standardUncertainty(), unit),
+                    Double.isFinite(r.margin()) ? FORMAT.valueLike(r.margin(), r.expandedUncertainty(), unit) : "-",
                     r.outcome().label()});
             }
         });
@@ -61,28 +82,11 @@ final class PropertyLines {
 
     /**
      * @param r the result of one limit
-     * @return why it came out as it did, in words: the figure's name, the value with its expanded uncertainty and the
-     *         limits; a figure that was not measured says so, with the reason the analysis gave
+     * @return why it came out as it did, as the verdict says it: the figure's name, the value with its expanded
+     *         uncertainty, the limits and the margin; a figure that was not measured says so, with the reason
      */
     static String reasonOf(LimitResult r) {
-        String label = labelOf(r);
-        if (!Double.isFinite(r.measuredValue())) {
-            int colon = r.reason().indexOf(": ");
-            return label + ": not measured" + (colon < 0 ? "" : PlainWords.of(r.reason().substring(colon)));
-        }
-        String unit = unitOf(r);
-        String value = r.standardUncertainty() > 0
-                ? Figures.plusMinus(r.measuredValue(), r.expandedUncertainty(), unit) + " (k = 2)"
-                : Figures.plusMinus(r.measuredValue(), r.standardUncertainty(), unit);
-        String limits = (r.limit().hasLowerBound() && r.limit().hasUpperBound() ? "the limits " : "the limit of ")
-                + bounds(r);
-        return label + " " + value + switch (r.outcome()) {
-            case PASS -> " lies within " + limits;
-            case FAIL -> " lies outside " + limits;
-            case NOT_DETERMINABLE -> Double.isFinite(r.margin())
-                    ? " cannot be judged against " + limits + ": the uncertainty reaches across a limit"
-                    : " cannot be judged against " + limits + ": it was measured in another unit";
-        };
+        return LimitText.reason(r, FORMAT);
     }
 
     /**
@@ -120,21 +124,12 @@ final class PropertyLines {
         return Figure.byKey(r.limit().figureKey()).map(Figure::label).orElse(r.limit().name());
     }
 
-    private static String unitOf(LimitResult r) {
-        return r.limit().unit().isBlank() ? "" : Figure.unitLabel(r.limit().unit());
-    }
-
     private static String bounds(LimitResult r) {
-        String unit = unitOf(r);
+        String unit = r.limit().unit();
         boolean low = r.limit().hasLowerBound();
         boolean high = r.limit().hasUpperBound();
-        String text = low && high ? Figures.plain(r.limit().lowerBound()) + " to " + Figures.plain(r.limit().upperBound())
-                : low ? "at least " + Figures.plain(r.limit().lowerBound())
-                : high ? "at most " + Figures.plain(r.limit().upperBound()) : "no bound";
-        return withUnit(text, unit);
-    }
-
-    private static String withUnit(String text, String unit) {
-        return unit.isEmpty() ? text : text + " " + unit;
+        return low && high ? FORMAT.number(r.limit().lowerBound()) + " to " + FORMAT.value(r.limit().upperBound(), unit)
+                : low ? "at least " + FORMAT.value(r.limit().lowerBound(), unit)
+                : "at most " + FORMAT.value(r.limit().upperBound(), unit);
     }
 }

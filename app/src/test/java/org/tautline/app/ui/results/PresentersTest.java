@@ -86,31 +86,20 @@ class PresentersTest {
     }
 
     @Test
-    void figuresRoundTheUncertaintyToTwoSignificantFiguresAndTheValueToMatch() {
-        // JCGM 100:2008 (GUM) 7.2.6: u to at most two significant figures, the value to the same place.
-        assertEquals("228.410 ± 0.012 Hz", Figures.plusMinus(228.41, 0.0123, "Hz"));
-        assertEquals("225.565 ± 0.026 Hz", Figures.plusMinus(225.565, 0.0262257, "Hz"));
-        assertEquals("146.5 ± 2.9 N", Figures.plusMinus(146.517, 2.93058, "N"));
-        assertEquals("382.6 ± 5.0", Figures.plusMinus(382.57, 4.99));
-        assertEquals("470 ± 190", Figures.plusMinus(466.6, 190.3));
-        assertEquals("-874 ± 55", Figures.plusMinus(-874.11, 55.2));
-        assertEquals("0.003488 ± 0.000032", Figures.plusMinus(0.0034875, 3.2e-5));
-        // 0.0996 rounds up to 0.10: two significant figures still, the value to hundredths.
-        assertEquals("1.23 ± 0.10", Figures.plusMinus(1.234, 0.0996));
-        // Outside 0.001 .. 10^6 the value and its uncertainty share one power of ten.
-        assertEquals("(1.00 ± 0.37) × 10⁻⁴", Figures.plusMinus(9.957e-5, 3.7e-5));
-        assertEquals("(5.3 ± 2.0) × 10⁻⁴ N m²", Figures.plusMinus(5.3211e-4, 2.0e-4, "N m²"));
-        assertEquals("(1.500 ± 0.020) × 10⁷", Figures.plusMinus(1.5e7, 2.0e5));
+    void windowValuesAreRoundedByTheSharedFormat() {
+        // JCGM 100:2008 (GUM) 7.2.6 (from memory): u to two significant figures, the value to the same place; the
+        // formatter's own tests hold the GUM's examples, here the window's use of it.
+        assertEquals("(228.410 ± 0.012) Hz", PropertyLines.shown(228.41, 0.0123, "Hz"), "GUM 7.2.6");
+        assertEquals("(530 ± 200) × 10⁻⁶ N m²", PropertyLines.shown(5.3211e-4, 2.0e-4, "N m^2"),
+                "GUM 7.2.6 in engineering notation, the unit typographic");
+        assertEquals("1.23 ± 0.10", PropertyLines.shown(1.234, 0.0996, ""), "GUM 7.2.6 with the carry");
     }
 
     @Test
-    void figuresSayWhenTheUncertaintyIsUnknownAndShowNoneForAFigureJudgedAsItStands() {
-        assertEquals("1 (uncertainty not evaluated)", Figures.plusMinus(1.0, Double.NaN));
-        assertEquals("0.5 m (uncertainty not evaluated)", Figures.plusMinus(0.5, Double.NaN, "m"));
-        assertEquals("0.01749", Figures.plusMinus(0.017494, 0.0), "no \"± 0.0\" where no uncertainty was evaluated");
-        assertEquals("not measured", Figures.plusMinus(Double.NaN, 1.0, "N"));
-        assertEquals("9.957 × 10⁻⁵", Figures.plain(9.957e-5));
-        assertEquals("215", Figures.plain(215.0));
-        assertEquals("0.001", Figures.plain(0.001));
+    void windowValuesSayWhenTheUncertaintyIsUnknownAndShowNoneForAFigureJudgedAsItStands() {
+        assertEquals("1, uncertainty not evaluated", PropertyLines.shown(1.0, Double.NaN, ""));
+        assertEquals("0.5 m, uncertainty not evaluated", PropertyLines.shown(0.5, Double.NaN, "m"));
+        assertEquals("0.017494", PropertyLines.shown(0.017494, 0.0, ""), "no \"± 0\" where no uncertainty was evaluated");
+        assertEquals("not determined", PropertyLines.shown(Double.NaN, 1.0, "N"));
     }
 }

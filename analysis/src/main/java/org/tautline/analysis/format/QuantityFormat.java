@@ -1,8 +1,12 @@
-package org.tautline.app.format;
+package org.tautline.analysis.format;
 
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+import org.tautline.analysis.AnalysisException;
 
 /**
  * Writes measured values for people: a value with its standard uncertainty as the GUM asks (JCGM 100:2008, 7.2.6:
@@ -12,7 +16,8 @@ import java.math.RoundingMode;
  * <p>Rules, the same on the terminal, in the window and in the report:
  * <ul>
  * <li>the uncertainty is rounded to two significant digits, to the nearest (7.2.6's example 28.05 kHz to 28 kHz;
- * half-way cases away from zero), with the carry (0.0996 becomes 0.10); the value to the same decimal place;</li>
+ * half-way cases away from zero), with the carry (0.0996 becomes 0.10), and written with both digits (0.8 as
+ * 0.80); the value to the same decimal place;</li>
  * <li>a number of magnitude 0.001 to below 10⁶ is written in full; a smaller or larger one, or one needing more
  * than six decimals, in engineering notation (a power of ten that is a multiple of 3) shared by value and
  * uncertainty: {@code (614 ± 61) × 10⁻⁶ N m²}, or {@code (614 +/- 61)e-6 N m^2} in ASCII;</li>
@@ -35,11 +40,13 @@ public record QuantityFormat(TextStyle style) {
     private static final int SMALLEST_PLAIN_EXPONENT = -3;
     private static final int LARGEST_PLAIN_EXPONENT = 5;
     private static final int MOST_PLAIN_DECIMALS = 6;
+    private static final String SUPERSCRIPT_DIGITS = "⁰¹²³⁴⁵⁶⁷⁸⁹";
+    private static final Pattern SUPERSCRIPT_POWER = Pattern.compile(" × 10([⁻]?[⁰¹²³⁴⁵⁶⁷⁸⁹]+)");
 
     /** Checks a style is given. */
     public QuantityFormat {
         if (style == null) {
-            throw new IllegalArgumentException("a quantity format needs a text style");
+            throw new AnalysisException("a quantity format needs a text style");
         }
     }
 
@@ -89,13 +96,13 @@ public record QuantityFormat(TextStyle style) {
      */
     public Rounded round(double value, double standardUncertainty) {
         if (!Double.isFinite(value)) {
-            throw new IllegalArgumentException("only a finite value can be rounded to its uncertainty, got " + value);
+            throw new AnalysisException("only a finite value can be rounded to its uncertainty, got " + value);
         }
         if (!(standardUncertainty > 0) || Double.isInfinite(standardUncertainty)) {
-            throw new IllegalArgumentException("a value is rounded to a positive finite uncertainty, got "
+            throw new AnalysisException("a value is rounded to a positive finite uncertainty, got "
                     + standardUncertainty);
         }
-        BigDecimal u = BigDecimal.valueOf(standardUncertainty).round(TWO_DIGITS);
+        BigDecimal u = twoDigits(standardUncertainty);
         BigDecimal v = BigDecimal.valueOf(value).setScale(u.scale(), RoundingMode.HALF_UP);
         int exponent = Math.max(magnitude(v), magnitude(u));
         if (plain(exponent, u.scale())) {
@@ -201,7 +208,7 @@ public record QuantityFormat(TextStyle style) {
         if (Double.isInfinite(standardUncertainty) || standardUncertainty == 0) {
             return value(standardUncertainty, unit);
         }
-        BigDecimal u = BigDecimal.valueOf(standardUncertainty).round(TWO_DIGITS);
+        BigDecimal u = twoDigits(standardUncertainty);
         String text = plain(magnitude(u), u.scale()) ? u.toPlainString() : number(u.doubleValue());
         String written = unit(unit);
         return text + (written.isEmpty() ? "" : " " + written);
@@ -220,10 +227,48 @@ public record QuantityFormat(TextStyle style) {
         return style.unitPowers() ? ascii.replace("^2", "²").replace("^3", "³") : ascii;
     }
 
+    /**
+     * A sentence written with the Unicode symbols ({@link TextStyle#UNICODE}) put into this style: "±" as this style's
+     * sign, {@code m²} as {@code m^2} and {@code × 10⁻⁶} as {@code e-6} where the style cannot show them; a sentence
+     * in Unicode style stays as it is.
+     *
+     * @param unicodeText a sentence written with Unicode symbols; null is taken as empty
+     * @return the sentence in this style
+     */
+    public String inStyle(String unicodeText) {
+        if (unicodeText == null) {
+            return "";
+        }
+        String out = unicodeText.replace("±", style.plusMinus());
+        if (!style.superscriptExponents()) {
+            Matcher m = SUPERSCRIPT_POWER.matcher(out);
+            StringBuilder plain = new StringBuilder();
+            while (m.find()) {
+                StringBuilder digits = new StringBuilder("e");
+                for (char c : m.group(1).toCharArray()) {
+                    digits.append(c == '⁻' ? '-' : (char) ('0' + SUPERSCRIPT_DIGITS.indexOf(c)));
+                }
+                m.appendReplacement(plain, digits.toString());
+            }
+            m.appendTail(plain);
+            out = plain.toString();
+        }
+        return style.unitPowers() ? out : out.replace("²", "^2").replace("³", "^3");
+    }
+
     private static void checkUncertainty(double standardUncertainty) {
         if (standardUncertainty < 0) {
-            throw new IllegalArgumentException("a standard uncertainty is 0 or more, got " + standardUncertainty);
+            throw new AnalysisException("a standard uncertainty is 0 or more, got " + standardUncertainty);
         }
+    }
+
+    /**
+     * An uncertainty rounded to the nearest two significant digits, written with both even where the second is a
+     * zero (0.8 as 0.80, 2 as 2.0), so that every uncertainty shows the same number of digits.
+     */
+    private static BigDecimal twoDigits(double uncertainty) {
+        BigDecimal u = BigDecimal.valueOf(uncertainty).round(TWO_DIGITS);
+        return u.precision() < 2 ? u.setScale(u.scale() + 2 - u.precision(), RoundingMode.UNNECESSARY) : u;
     }
 
     /** The power of ten of the leading digit; 0 for zero. */
@@ -242,7 +287,7 @@ public record QuantityFormat(TextStyle style) {
         }
         StringBuilder out = new StringBuilder(" × 10");
         for (char c : Integer.toString(exponent).toCharArray()) {
-            out.append(c == '-' ? '⁻' : "⁰¹²³⁴⁵⁶⁷⁸⁹".charAt(c - '0'));
+            out.append(c == '-' ? '⁻' : SUPERSCRIPT_DIGITS.charAt(c - '0'));
         }
         return out.toString();
     }

@@ -1,4 +1,6 @@
-package org.tautline.app.format;
+package org.tautline.analysis.format;
+
+import org.tautline.analysis.AnalysisException;
 
 /**
  * A value and its standard uncertainty rounded together, as text (GUM, JCGM 100:2008, 7.2.6): the uncertainty to two
@@ -12,10 +14,10 @@ public record Rounded(String value, String uncertainty, int exponent) {
     /** Checks that the digits are given and the exponent is one of engineering notation. */
     public Rounded {
         if (value == null || uncertainty == null || value.isBlank() || uncertainty.isBlank()) {
-            throw new IllegalArgumentException("a rounded value needs the digits of the value and of the uncertainty");
+            throw new AnalysisException("a rounded value needs the digits of the value and of the uncertainty");
         }
         if (exponent % 3 != 0) {
-            throw new IllegalArgumentException("engineering notation uses powers of ten that are multiples of 3, got "
+            throw new AnalysisException("engineering notation uses powers of ten that are multiples of 3, got "
                     + exponent);
         }
     }

@@ -1,8 +1,10 @@
-package org.tautline.app.format;
+package org.tautline.analysis.format;
 
 import java.nio.charset.Charset;
 import java.nio.charset.CharsetEncoder;
 import java.util.Optional;
+
+import org.tautline.analysis.AnalysisException;
 
 /**
  * Which symbols an output can show: the plus-minus sign, powers in units ({@code m²}) and superscript exponents
@@ -27,7 +29,7 @@ public record TextStyle(String plusMinus, boolean unitPowers, boolean superscrip
     /** Checks the sign is one of the two forms. */
     public TextStyle {
         if (!"±".equals(plusMinus) && !"+/-".equals(plusMinus)) {
-            throw new IllegalArgumentException("the plus-minus sign is \"±\" or \"+/-\", got \"" + plusMinus + "\"");
+            throw new AnalysisException("the plus-minus sign is \"±\" or \"+/-\", got \"" + plusMinus + "\"");
         }
     }
 

@@ -1,4 +1,4 @@
-package org.tautline.app.format;
+package org.tautline.analysis.format;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -8,6 +8,7 @@ import java.nio.charset.Charset;
 import java.nio.charset.StandardCharsets;
 
 import org.junit.jupiter.api.Test;
+import org.tautline.analysis.AnalysisException;
 
 /**
  * The formatter against the GUM's own examples (JCGM 100:2008, "Evaluation of measurement data: Guide to the
@@ -102,8 +103,8 @@ class QuantityFormatTest {
         assertEquals("infinity N", unicode.value(Double.POSITIVE_INFINITY, "N"));
         assertEquals("-infinity", unicode.number(Double.NEGATIVE_INFINITY));
         assertEquals("150 N, uncertainty unbounded", unicode.withUncertainty(150, Double.POSITIVE_INFINITY, "N"));
-        assertThrows(IllegalArgumentException.class, () -> unicode.withUncertainty(1, -0.1, "N"));
-        assertThrows(IllegalArgumentException.class, () -> unicode.round(Double.NaN, 0.1));
+        assertThrows(AnalysisException.class, () -> unicode.withUncertainty(1, -0.1, "N"));
+        assertThrows(AnalysisException.class, () -> unicode.round(Double.NaN, 0.1));
     }
 
     @Test
@@ -124,5 +125,46 @@ class QuantityFormatTest {
         assertEquals(new TextStyle("±", true, false), TextStyle.forStandardPdfFonts());
         assertEquals("(614 ± 61)e-6 N m²", new QuantityFormat(TextStyle.forStandardPdfFonts())
                 .withUncertainty(6.1432e-4, 6.14e-5, "N m^2"), "the report's fonts");
+    }
+
+    @Test
+    void writesEveryUncertaintyWithTwoSignificantDigits() {
+        // GUM 7.2.6 (from memory): "at most two significant digits"; we always give two, so that 0.8 and 2 read
+        // alike and the value keeps the same number of decimals whatever the uncertainty's second digit is.
+        assertEquals("(151.20 ± 0.80) N", unicode.withUncertainty(151.2, 0.8, "N"), "0.8 written as 0.80");
+        assertEquals("(135.0 ± 2.0) N", unicode.withUncertainty(135, 2, "N"), "2 written as 2.0");
+        assertEquals("0.00200 ± 0.00020", unicode.withUncertainty(0.002, 0.0002, ""), "2e-4 written as 0.00020");
+        assertEquals("0.80", unicode.uncertainty(0.8, ""));
+    }
+
+    @Test
+    void roundsTheFiguresOfTheWorkbenchAsGum726Asks() {
+        // GUM 7.2.6 (from memory): u to two significant figures, the value to the same decimal place.
+        assertEquals("(228.410 ± 0.012) Hz", unicode.withUncertainty(228.41, 0.0123, "Hz"), "GUM 7.2.6");
+        assertEquals("(225.565 ± 0.026) Hz", unicode.withUncertainty(225.565, 0.0262257, "Hz"), "GUM 7.2.6");
+        assertEquals("(146.5 ± 2.9) N", unicode.withUncertainty(146.517, 2.93058, "N"), "GUM 7.2.6");
+        assertEquals("382.6 ± 5.0", unicode.withUncertainty(382.57, 4.99, ""), "GUM 7.2.6, the carry to 5.0");
+        assertEquals("470 ± 190", unicode.withUncertainty(466.6, 190.3, ""), "GUM 7.2.6, tens place");
+        assertEquals("-874 ± 55", unicode.withUncertainty(-874.11, 55.2, ""), "GUM 7.2.6, negative");
+        assertEquals("0.003488 ± 0.000032", unicode.withUncertainty(0.0034875, 3.2e-5, ""), "GUM 7.2.6, half away");
+        assertEquals("(100 ± 37) × 10⁻⁶", unicode.withUncertainty(9.957e-5, 3.7e-5, ""),
+                "GUM 7.2.6 with the carry into engineering notation");
+        assertEquals("(15.00 ± 0.20) × 10⁶", unicode.withUncertainty(1.5e7, 2.0e5, ""), "a large value");
+        assertEquals("99.57 × 10⁻⁶", unicode.number(9.957e-5), "a small value without uncertainty");
+        assertEquals("215", unicode.number(215.0));
+        assertEquals("0.001", unicode.number(0.001));
+    }
+
+    @Test
+    void putsASentenceWrittenInUnicodeIntoTheOutputsStyle() {
+        String sentence = "bending stiffness EI = (614 ± 61) × 10⁻⁶ N m² (k = 2)";
+        assertEquals("bending stiffness EI = (614 +/- 61)e-6 N m^2 (k = 2)", ascii.inStyle(sentence), "LANG=C");
+        assertEquals(ascii.withUncertainty(6.1432e-4, 6.14e-5, "N m^2"), ascii.inStyle(unicode.withUncertainty(6.1432e-4,
+                6.14e-5, "N m^2")), "the same text as written in ASCII from the start");
+        assertEquals("(614 ± 61)e-6 N m²", new QuantityFormat(TextStyle.forStandardPdfFonts())
+                .inStyle("(614 ± 61) × 10⁻⁶ N m²"), "the report's fonts");
+        assertEquals("1.5e9 and 2e12", ascii.inStyle(unicode.number(1.5e9) + " and " + unicode.number(2e12)));
+        assertEquals(sentence, unicode.inStyle(sentence), "Unicode stays Unicode");
+        assertEquals("", unicode.inStyle(null));
     }
 }
