@@ -309,18 +309,21 @@ public final class HarmonicAssigner {
         double ss = specimen.sensorShape(h);
         if (fh < bandLow || fh > bandHigh) {
             return new AbsentHarmonic(h, fh, AbsenceReason.OUTSIDE_BAND, String.format(Locale.ROOT,
-                    "outside the band (expected %.3f Hz, band %.3f .. %.3f Hz)", fh, bandLow, bandHigh));
+                    "outside the band (expected at %.3f Hz, the band is %.3f to %.3f Hz)", fh, bandLow, bandHigh));
         }
         if (Math.abs(sf) < nodeThreshold) {
             return new AbsentHarmonic(h, fh, AbsenceReason.NODE_AT_FORCING_POINT, String.format(Locale.ROOT,
-                    "node at the forcing point (|sin(n pi x_f/L)| = %.3f)", Math.abs(sf)));
+                    "the stinger is at a node of this mode (the mode shape there is %.3f of its largest)",
+                    Math.abs(sf)));
         }
         if (Math.abs(ss) < nodeThreshold) {
             return new AbsentHarmonic(h, fh, AbsenceReason.NODE_AT_SENSOR, String.format(Locale.ROOT,
-                    "node at the sensor (|sin(n pi x_s/L)| = %.3f)", Math.abs(ss)));
+                    "the sensor is at a node of this mode (the mode shape there is %.3f of its largest)",
+                    Math.abs(ss)));
         }
         return new AbsentHarmonic(h, fh, AbsenceReason.BELOW_NOISE, String.format(Locale.ROOT,
-                "below the noise (no node: |sin(n pi x_f/L) sin(n pi x_s/L)| = %.3f)", Math.abs(sf * ss)));
+                "below the noise, with neither the stinger nor the sensor at a node (the mode shapes there multiply"
+                        + " to %.3f of their largest)", Math.abs(sf * ss)));
     }
 
     private static void require(boolean condition, String message) {

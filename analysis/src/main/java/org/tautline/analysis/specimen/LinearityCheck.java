@@ -2,11 +2,12 @@ package org.tautline.analysis.specimen;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.TreeMap;
 
 import org.tautline.analysis.AnalysisException;
+import org.tautline.analysis.format.QuantityFormat;
+import org.tautline.analysis.format.TextStyle;
 
 /**
  * Checks that natural frequencies do not depend on the test level, against the Kirchhoff-Carrier backbone.
@@ -22,6 +23,8 @@ import org.tautline.analysis.AnalysisException;
  * disagreement points to something else (a slipping clamp, a loose shaker, heating).
  */
 public final class LinearityCheck {
+    /** How findings write numbers: GUM 7.2.6 rounding, one ±. */
+    private static final QuantityFormat WORDS = new QuantityFormat(TextStyle.UNICODE);
     private final double relativeTolerance;
     private final double sigmas;
 
@@ -116,17 +119,19 @@ public final class LinearityCheck {
             boolean significant = Math.abs(shift) > sigmas * std && Math.abs(shift) > relativeTolerance;
             shifts.add(new HarmonicShift(n, f1, f2, shift, std, predicted, significant));
             if (significant) {
-                findings.add(String.format(Locale.ROOT, "harmonic %d shifted by %.3g (+- %.2g) between the runs%s",
-                        n, shift, std, Double.isNaN(predicted) ? "; EA unknown, no backbone prediction"
-                                : String.format(Locale.ROOT, "; the Kirchhoff-Carrier backbone predicts %.3g", predicted)));
+                findings.add("harmonic " + n + " shifted by " + WORDS.withUncertainty(shift, std, "")
+                        + " (relative) between the runs" + (Double.isNaN(predicted)
+                        ? "; axial stiffness EA not stated, so the Kirchhoff-Carrier backbone gives no prediction"
+                        : "; the Kirchhoff-Carrier backbone predicts " + WORDS.number(predicted)));
             }
         }
         if (shifts.isEmpty()) {
             throw new AnalysisException("the two runs share no harmonic: " + a.keySet() + " and " + b.keySet());
         }
         boolean linear = shifts.stream().noneMatch(HarmonicShift::significant);
-        findings.add(0, linear ? "linear at the test level: no harmonic shifted by more than " + relativeTolerance
-                + " and " + sigmas + " standard errors" : "not linear at the test level");
+        findings.add(0, linear ? "linear at the test level: no harmonic shifted by more than " + WORDS.number(
+                relativeTolerance) + " (relative) and " + WORDS.number(sigmas) + " standard errors"
+                : "not linear at the test level");
         return new LinearityResult(shifts, linear, findings);
     }
 

@@ -144,7 +144,8 @@ public final class ParticipationPattern {
         if (refined[2] < 0) {
             findings.add("the modal constants carry an overall negative sign: check the sensor polarity");
         }
-        findings.add("positions are known up to x -> L - x at both points and to swapping x_f and x_s");
+        findings.add("each position is known only up to its mirror image about mid-span (x or L - x), and the stinger"
+                + " and sensor positions may be swapped");
         return new PatternFit(entries, stated[0], stated[1], xf, refined[3] * length, xs, refined[4] * length,
                 refined[2], refined[5], specimen.linearDensityKgPerM() / Math.abs(refined[2]), forcingOff, sensorOff,
                 findings);

@@ -7,6 +7,8 @@ import java.util.Locale;
 
 import org.hipparchus.analysis.solvers.BracketingNthOrderBrentSolver;
 import org.tautline.analysis.AnalysisException;
+import org.tautline.analysis.format.QuantityFormat;
+import org.tautline.analysis.format.TextStyle;
 
 /**
  * Estimates tension and bending stiffness from a whole numbered harmonic series.
@@ -26,6 +28,8 @@ public final class TensionEstimator {
     /** Reduced chi-square above which the fit is reported as poor. */
     public static final double POOR_FIT_CHI_SQUARE = 3.0;
     private static final int BELT_PASSES = 50;
+    /** How warnings write numbers: GUM 7.2.6 rounding, one ±, Unicode units (outputs put them in their own style). */
+    private static final QuantityFormat WORDS = new QuantityFormat(TextStyle.UNICODE);
 
     private final double inclinationRad;
 
@@ -105,13 +109,13 @@ public final class TensionEstimator {
             bStd = eta != 0 ? Math.abs(b) * Math.sqrt(Math.max(relVar, 0)) : Math.PI * Math.PI * Math.sqrt(fit.varEta)
                     / (tau * length * length);
             if (chi2 > POOR_FIT_CHI_SQUARE) {
-                warnings.add(String.format(Locale.ROOT, "the harmonic series fits the %s stiff-string model poorly "
-                        + "(reduced chi-square %.2f): check the end condition and the harmonic numbering",
-                        specimen.ends(), chi2));
+                warnings.add(String.format(Locale.ROOT, "the harmonic series fits the stiff-string model with %s ends"
+                        + " poorly (reduced chi-square %.2f): check the end condition and the harmonic numbering",
+                        specimen.ends().label(), chi2));
             }
             if (ei < 0) {
-                warnings.add(String.format(Locale.ROOT, "fitted bending stiffness is negative (%.4g +- %.2g N m^2): "
-                        + "the series shows no measurable stiffness", ei, eiStd));
+                warnings.add("the fitted bending stiffness is negative, " + WORDS.withUncertainty(ei, eiStd, "N m^2")
+                        + ": the series shows no measurable stiffness");
             }
         }
         addCrossChecks(specimen, series, tau, eta, checks);
@@ -133,7 +137,7 @@ public final class TensionEstimator {
         requireSeries(series);
         if (!(tensionN > 0) || !(tensionStdN >= 0)) {
             throw new AnalysisException("known tension must be positive with a non-negative uncertainty, got "
-                    + tensionN + " +- " + tensionStdN + " N");
+                    + tensionN + " ± " + tensionStdN + " N");
         }
         SpecificFit fit = fitSpecific(specimen, series);
         if (fit != null) {
@@ -257,21 +261,20 @@ public final class TensionEstimator {
     private void addWarnings(Specimen specimen, double tension, List<String> warnings) {
         double v = specimen.beltSpeedMPerS();
         if (v > 0) {
-            warnings.add(String.format(Locale.ROOT, "frequencies corrected for the belt speed %.4g m/s by Mote's "
-                    + "factor 1 - v^2/c^2 = %.6f", v, MovingBelt.frequencyFactor(v, tension,
-                    specimen.linearDensityKgPerM())));
+            warnings.add("frequencies corrected for the belt speed of " + WORDS.value(v, "m/s") + " by Mote's factor"
+                    + " 1 - v²/c² = " + WORDS.number(MovingBelt.frequencyFactor(v, tension, specimen.linearDensityKgPerM())));
         }
         if (specimen.axialStiffnessN() > 0) {
             double lambda2 = CableSag.lambdaSquared(specimen.linearDensityKgPerM(), specimen.lengthM(), inclinationRad,
                     tension, specimen.axialStiffnessN());
             if (lambda2 > CableSag.WARNING_LAMBDA_SQUARED) {
-                warnings.add(String.format(Locale.ROOT, "sag parameter lambda^2 = %.3g exceeds %.2g (Irvine 1981): "
-                        + "sag stiffens the symmetric in-plane modes, so tension read from odd harmonics is high; "
-                        + "prefer the even (antisymmetric) or out-of-plane modes", lambda2,
-                        CableSag.WARNING_LAMBDA_SQUARED));
+                warnings.add("the cable's sag parameter (Irvine 1981) is " + String.format(Locale.ROOT, "%.3g", lambda2)
+                        + ", above " + WORDS.number(CableSag.WARNING_LAMBDA_SQUARED) + ": sag stiffens the symmetric"
+                        + " in-plane modes, so tension read from odd harmonics is high; prefer the even (antisymmetric) or"
+                        + " out-of-plane modes");
             }
         } else {
-            warnings.add("axial stiffness EA not stated: sag (Irvine's lambda^2) was not checked");
+            warnings.add("axial stiffness EA not stated: the cable's sag was not checked");
         }
     }
 

@@ -125,7 +125,7 @@ class TensionEstimatorTest {
         double f0 = span.nominalFundamentalHz();
         List<NumberedFrequency> series = List.of(new NumberedFrequency(1, f0, 1e-4), new NumberedFrequency(2, 2 * f0, 1e-4));
         TensionEstimate s = estimator.estimate(span, series);
-        assertTrue(s.warnings().stream().anyMatch(w -> w.startsWith("sag parameter lambda^2 = ")), s.warnings().toString());
+        assertTrue(s.warnings().stream().anyMatch(w -> w.startsWith("the cable's sag parameter (Irvine 1981) is ")), s.warnings().toString());
     }
 
     @Test
@@ -137,7 +137,7 @@ class TensionEstimatorTest {
         }
         TensionEstimate e = estimator.estimate(PINNED, series);
         assertTrue(e.reducedChiSquare() > TensionEstimator.POOR_FIT_CHI_SQUARE, "reduced chi-square " + e.reducedChiSquare());
-        assertTrue(e.warnings().get(0).startsWith("the harmonic series fits the PINNED stiff-string model poorly"),
+        assertTrue(e.warnings().get(0).startsWith("the harmonic series fits the stiff-string model with pinned ends poorly"),
                 e.warnings().toString());
     }
 

@@ -157,7 +157,7 @@ final class FitCommand implements Callable<Integer> {
         }
         estimate.quality().ifPresent(q -> out.append(String.format(Locale.ROOT,
                 "Fit: normalised residual %s, correlation %s%n", f.number(q.normalisedResidual()), f.number(q.correlation()))));
-        estimate.warnings().forEach(w -> out.append("note: ").append(w).append('\n'));
+        estimate.warnings().forEach(w -> out.append("note: ").append(f.inStyle(w)).append('\n'));
         return out.toString();
     }
 

@@ -66,13 +66,13 @@ public final class ResultText {
         appendModes(out, r, truth, f);
         for (AbsentHarmonic a : r.harmonics().absent()) {
             out.append(String.format(Locale.ROOT, "  harmonic %d (about %s) absent: %s%n", a.harmonic(),
-                    f.value(a.expectedFrequencyHz(), "Hz"), a.explanation()));
+                    f.value(a.expectedFrequencyHz(), "Hz"), f.inStyle(a.explanation())));
         }
-        r.modal().warnings().forEach(w -> out.append("  note: ").append(w).append('\n'));
+        r.modal().warnings().forEach(w -> out.append("  note: ").append(f.inStyle(w)).append('\n'));
         appendProperties(out, r, truth, f);
         if (!r.cautions().isEmpty()) {
             out.append(String.format(Locale.ROOT, "%nCautions (the result cannot be trusted as a whole)%n"));
-            r.cautions().forEach(c -> out.append("  ").append(c).append('\n'));
+            r.cautions().forEach(c -> out.append("  ").append(f.inStyle(c)).append('\n'));
         }
         r.verdict().ifPresent(verdict -> {
             out.append(String.format(Locale.ROOT, "%nVerdict: %s%n", verdict.outcome().label().toUpperCase(Locale.ROOT)));
@@ -143,7 +143,7 @@ public final class ResultText {
                     f.number(t.inharmonicityB()), trueEi));
             t.crossChecks().forEach(c -> out.append(String.format(Locale.ROOT, "  cross-check, %s: %s%n", c.method(),
                     f.value(c.tensionN(), "N"))));
-            t.warnings().forEach(w -> out.append("  note: ").append(w).append('\n'));
+            t.warnings().forEach(w -> out.append("  note: ").append(f.inStyle(w)).append('\n'));
         } else {
             out.append("  tension: not determined (no harmonic numbered)\n");
         }
@@ -152,14 +152,14 @@ public final class ResultText {
             out.append(String.format(Locale.ROOT, "  stinger at %s, sensor at %s (from the modal constants)%n",
                     f.withUncertainty(p.forcingPositionM(), p.forcingPositionStdM(), "m"),
                     f.withUncertainty(p.sensorPositionM(), p.sensorPositionStdM(), "m")));
-            p.findings().forEach(x -> out.append("  ").append(x).append('\n'));
+            p.findings().forEach(x -> out.append("  ").append(f.inStyle(x)).append('\n'));
         }
         r.linearity().ifPresent(l -> {
             l.shifts().forEach(h -> out.append(String.format(Locale.ROOT,
                     "  level check, harmonic %d: %s -> %s, relative shift %s (Kirchhoff-Carrier predicts %s)%n",
                     h.harmonic(), f.value(h.firstFrequencyHz(), "Hz"), f.value(h.secondFrequencyHz(), "Hz"),
                     f.withUncertainty(h.relativeShift(), h.relativeShiftStd(), ""), f.number(h.predictedRelativeShift()))));
-            l.findings().forEach(x -> out.append("  ").append(x).append('\n'));
+            l.findings().forEach(x -> out.append("  ").append(f.inStyle(x)).append('\n'));
         });
     }
 }

@@ -165,10 +165,13 @@ final class PageWriter implements AutoCloseable {
         return lines;
     }
 
-    /** Replaces characters the standard fonts cannot show (WinAnsi) with close ASCII. */
+    /**
+     * Puts text into the report's style ({@link ReportText#FORMAT}: "× 10⁻⁶" as "e-6") and replaces the other
+     * characters the standard fonts cannot show (WinAnsi) with close ASCII.
+     */
     String clean(String content) {
         StringBuilder out = new StringBuilder();
-        for (char c : content.replace('\u2212', '-').replace("\u03b6", "zeta").replace("\u03bc", "mu")
+        for (char c : ReportText.FORMAT.inStyle(content).replace('\u2212', '-').replace("\u03b6", "zeta").replace("\u03bc", "mu")
                 .replace('\t', ' ').replace('\n', ' ').toCharArray()) {
             try {
                 regular.encode(String.valueOf(c));
