@@ -17,6 +17,7 @@ import org.tautline.analysis.verdict.Verdict;
 import org.tautline.app.qualify.DemoOutcome;
 import org.tautline.app.qualify.QualificationResult;
 import org.tautline.app.qualify.TruthComparison;
+import org.tautline.app.report.RunFolderWriter;
 import org.tautline.driver.sim.SimulatedSpecimen;
 import org.tautline.driver.sim.SimulationConfig;
 import org.tautline.driver.sim.SimulationTruth;
@@ -223,53 +224,11 @@ final class ResultJson {
 
     /** A specimen in the specimen-file format that {@code SpecimenFile} reads. */
     static ObjectNode specimenFile(Specimen s) {
-        ObjectNode node = MAPPER.createObjectNode();
-        node.put("id", s.id());
-        node.put("lengthM", s.lengthM());
-        node.put("ends", s.ends().name().toLowerCase(java.util.Locale.ROOT));
-        s.material().ifPresent(m -> node.put("material", m.name().toLowerCase(java.util.Locale.ROOT).replace('_', '-')));
-        node.put("linearDensityKgPerM", s.linearDensityKgPerM());
-        putUncertainty(node, "linearDensityStdKgPerM", s.linearDensityStdKgPerM());
-        node.put("bendingStiffnessNm2", s.bendingStiffnessNm2());
-        putUncertainty(node, "bendingStiffnessStdNm2", s.bendingStiffnessStdNm2());
-        node.put("forcingPositionM", s.forcingPositionM());
-        node.put("sensorPositionM", s.sensorPositionM());
-        node.put("nominalTensionN", s.nominalTensionN());
-        node.put("beltSpeedMPerS", s.beltSpeedMPerS());
-        node.put("sensorAngleDeg", Math.toDegrees(s.sensorAngleRad()));
-        node.put("axialStiffnessN", s.axialStiffnessN());
-        return node;
-    }
-
-    /** An uncertainty as a specimen file writes it: a number, or "not evaluated" for NaN. */
-    private static void putUncertainty(ObjectNode node, String field, double std) {
-        if (Double.isNaN(std)) {
-            node.put(field, "not evaluated");
-        } else {
-            node.put(field, std);
-        }
+        return RunFolderWriter.specimenFile(s);
     }
 
     /** A specification in the format that {@code SpecificationFile} reads. */
     static ObjectNode specificationFile(org.tautline.analysis.verdict.Specification spec) {
-        ObjectNode node = MAPPER.createObjectNode();
-        node.put("name", spec.name());
-        if (!spec.revision().isEmpty()) {
-            node.put("revision", spec.revision());
-        }
-        ArrayNode limits = node.putArray("limits");
-        for (org.tautline.analysis.verdict.Limit limit : spec.limits()) {
-            ObjectNode l = limits.addObject();
-            l.put("name", limit.name());
-            l.put("figure", limit.figureKey());
-            l.put("unit", limit.unit());
-            if (limit.hasLowerBound()) {
-                l.put("lower", limit.lowerBound());
-            }
-            if (limit.hasUpperBound()) {
-                l.put("upper", limit.upperBound());
-            }
-        }
-        return node;
+        return RunFolderWriter.specificationFile(spec);
     }
 }

@@ -74,7 +74,8 @@ final class TraceSections {
         }
         List<Instrument> instruments = setup.rig().get().instruments();
         if (instruments.isEmpty()) {
-            return s.line("The rig file lists no instruments: serials and calibration are not given.", 9);
+            return s.line("No instruments are recorded for the rig " + setup.rig().get().name() + ": serials and"
+                    + " calibration are not given.", 9);
         }
         LocalDate on = setup.testedAt().orElse(info.createdAt()).atZone(ZoneOffset.UTC).toLocalDate();
         s.row(new String[] {"instrument", "model", "serial", "certificate", "due", "calibration"}, INSTRUMENT_COLUMNS, true);

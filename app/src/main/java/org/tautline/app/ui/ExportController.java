@@ -12,22 +12,28 @@ import java.util.concurrent.ExecutionException;
 import javax.swing.JFileChooser;
 import javax.swing.JOptionPane;
 import javax.swing.SwingWorker;
-import javax.swing.filechooser.FileNameExtensionFilter;
 
 import org.tautline.app.qualify.QualificationResult;
 import org.tautline.app.report.QualificationReport;
 import org.tautline.app.report.ReportInfo;
 import org.tautline.app.report.RunDirectory;
 import org.tautline.app.report.RunExport;
+import org.tautline.app.report.RunFolderWriter;
+import org.tautline.app.trace.RunSetup;
+import org.tautline.app.ui.results.ResultOrigin;
 import org.tautline.driver.sweep.SweepResult;
 
 /**
- * Writes the PDF report and the CSV and JSON exports of the result on show; the writing runs off the event
- * thread. Every method is called on the event thread.
+ * Writes the report (with the run's data files, its setup and their checksums, as the command line's report has
+ * them) and the CSV and JSON exports of the result on show; the writing runs off the event thread. Every method but
+ * {@link #writeReportFolder} is called on the event thread.
  */
 final class ExportController {
     private final WorkbenchParts parts;
+    /** The report's file name inside the folder it is exported to, as {@code demo --out} names it. */
+    static final String REPORT = "report.pdf";
     private Optional<QualificationResult> shown = Optional.empty();
+    private Optional<ResultOrigin> origin = Optional.empty();
 
     ExportController(WorkbenchParts parts) {
         this.parts = parts;
@@ -38,35 +44,68 @@ final class ExportController {
         shown = Optional.of(result);
     }
 
+    /** @param from where the result now on show came from: when the run was made, on which rig */
+    void originShown(ResultOrigin from) {
+        origin = Optional.of(from);
+    }
+
     /** The result on show is no longer current (a new run started, or one ended without a result): nothing to export. */
     void resultWithdrawn() {
         shown = Optional.empty();
+        origin = Optional.empty();
     }
 
-    /** Asks for the operator's name and a PDF file, then writes the qualification report there. */
+    /**
+     * Asks for a new or empty folder and the report's details (operator, report number, the air, a rig file), then
+     * writes the run's data files and the report there, off the event thread.
+     */
     void exportReport() {
         if (shown.isEmpty()) {
             nothingYet();
             return;
         }
+        QualificationResult result = shown.get();
+        Optional<ResultOrigin> from = origin;
         JFileChooser chooser = new JFileChooser();
-        chooser.setFileFilter(new FileNameExtensionFilter("PDF report", "pdf"));
-        chooser.setSelectedFile(new java.io.File(shown.get().specimen().id() + "-report.pdf"));
+        chooser.setFileSelectionMode(JFileChooser.DIRECTORIES_ONLY);
+        chooser.setDialogTitle("New or empty folder for the report and its data files");
+        chooser.setSelectedFile(new java.io.File(result.specimen().id() + "-report"));
         if (chooser.showSaveDialog(parts.frame()) != JFileChooser.APPROVE_OPTION) {
             return;
         }
-        String operator = JOptionPane.showInputDialog(parts.frame(), "Operator's name for the report (may be left empty):",
-                System.getProperty("user.name", ""));
-        if (operator == null) {
+        Optional<ReportDetails> details = ReportDetailsForm.ask(parts.frame(), result.sweep().isPresent()
+                ? from.map(ResultOrigin::when) : Optional.empty());
+        if (details.isEmpty()) {
             return;
         }
-        Path file = chooser.getSelectedFile().toPath();
-        QualificationResult result = shown.get();
-        Path folder = file.toAbsolutePath().getParent();
-        RunDirectory run = new RunDirectory(folder, result, metadata(result), recordedSweep(result));
-        ReportInfo info = new ReportInfo(operator.strip(), ReportInfo.SOFTWARE, Instant.now());
-        inBackground("writing the report to " + file.getFileName(), "Wrote the report " + file, "Could not write the report",
-                () -> QualificationReport.write(run, info, "", List.of(), file));
+        Path folder = chooser.getSelectedFile().toPath().toAbsolutePath();
+        inBackground("writing the report to " + folder.getFileName(), "Wrote the report " + folder.resolve(REPORT)
+                + " with the run's data files beside it", "Could not write the report",
+                () -> writeReportFolder(folder, result, from, details.get(), Instant.now()));
+    }
+
+    /**
+     * Writes a result on show as a run folder with its report, as {@code demo --out} and {@code report} would: the
+     * data files ({@link RunFolderWriter}), then {@value #REPORT} naming their SHA-256, the test date and the rig.
+     *
+     * @param folder a new or empty folder
+     * @param result the result on show
+     * @param from where it came from (when the sweep started, on which rig), when known
+     * @param details what the person exporting gave
+     * @param now the report date
+     * @return the report's file
+     * @throws IOException when a file cannot be written or the rig file read
+     */
+    static Path writeReportFolder(Path folder, QualificationResult result, Optional<ResultOrigin> from,
+                                  ReportDetails details, Instant now) throws IOException {
+        boolean sweptHere = result.sweep().isPresent();
+        RunSetup setup = details.setup(sweptHere ? from.map(ResultOrigin::madeAt) : Optional.empty(),
+                sweptHere ? from.map(ResultOrigin::rig) : Optional.empty());
+        RunDirectory run = RunFolderWriter.write(folder, result, metadata(result, from), recordedSweep(result), setup);
+        Path pdf = folder.resolve(REPORT);
+        QualificationReport.write(run, new ReportInfo(details.operator(), ReportInfo.SOFTWARE, now,
+                details.reportNumber()), "", List.of(), pdf);
+        return pdf;
     }
 
     /** Asks for a folder, then writes the FRF, modes, properties and verdict there as CSV and JSON. */
@@ -87,13 +126,21 @@ final class ExportController {
                 "Could not export the results", () -> RunExport.write(result, folder));
     }
 
-    /** What the report says of the rig and the plan: the workbench knows the plan of a sweep it ran itself. */
-    private static Map<String, String> metadata(QualificationResult result) {
+    /** What the FRF file and the report say of the rig and the plan: the workbench knows the plan of its own sweeps. */
+    private static Map<String, String> metadata(QualificationResult result, Optional<ResultOrigin> from) {
         Map<String, String> lines = new LinkedHashMap<>();
+        lines.put("specimen", result.specimen().id());
         lines.put("source", "Tautline workbench");
-        result.sweep().ifPresentOrElse(sweep -> lines.put("sweep plan", sweep.plan().describe()),
+        from.ifPresent(o -> lines.put("rig", oneLine(o.rig())));
+        from.ifPresent(o -> lines.put(o.how(), o.when()));
+        result.sweep().ifPresentOrElse(sweep -> lines.put("sweep plan", oneLine(sweep.plan().describe())),
                 () -> lines.put("sweep plan", "none: the FRF was imported from a file"));
         return lines;
+    }
+
+    /** A metadata value on one line, as the FRF file's header needs. */
+    private static String oneLine(String text) {
+        return text.replaceAll("\\s*[\\r\\n]+\\s*", "; ");
     }
 
     private static Optional<String> recordedSweep(QualificationResult result) {

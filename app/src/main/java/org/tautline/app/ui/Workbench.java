@@ -148,6 +148,7 @@ public final class Workbench implements WorkbenchParts {
     private void showResult(QualificationResult result, ResultOrigin origin) {
         lotAdd.resultCurrent(true);
         results.showResults(result, origin);
+        exports.originShown(origin);
         resultChanged(result);
         tabs.setSelectedIndex(3);
     }
