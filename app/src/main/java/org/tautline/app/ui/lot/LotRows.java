@@ -5,10 +5,14 @@ import java.util.List;
 import java.util.Locale;
 
 import org.tautline.analysis.verdict.Figure;
+import org.tautline.analysis.format.QuantityFormat;
+import org.tautline.analysis.format.TextStyle;
 import org.tautline.app.lot.FigureStatistics;
 
 /** The rows of the lot statistics table, as text: the presenter of the lot screen, free of Swing. */
 public final class LotRows {
+    private static final QuantityFormat NUMBERS = new QuantityFormat(TextStyle.UNICODE);
+
     /** Column headings, with the unit column separate. */
     public static final List<String> COLUMNS = List.of("Figure", "Unit", "n", "Mean", "Std", "Min", "Max", "Lower limit",
             "Upper limit", "Cpk");
@@ -44,8 +48,9 @@ public final class LotRows {
                         + out.stream().map(i -> Integer.toString(i + 1)).reduce((a, b) -> a + ", " + b).orElse(""));
     }
 
+    /** Six significant digits, trailing zeros dropped, powers of ten as people write them; "-" for none. */
     private static String number(double v) {
-        return Double.isNaN(v) ? "-" : String.format(Locale.ROOT, "%.6g", v);
+        return Double.isNaN(v) ? "-" : NUMBERS.number(v);
     }
 
     private static String cpk(double v) {

@@ -18,9 +18,8 @@ class LotRowsTest {
         FigureStatistics withLimits = FigureStatistics.of("tensionN", "N", List.of(1.0, 2.0, 3.0), 0.0, 5.0);
         FigureStatistics noLimits = FigureStatistics.of("f1Hz", "Hz", List.of(10.0), Double.NaN, Double.NaN);
         List<String[]> rows = LotRows.of(List.of(withLimits, noLimits));
-        assertArrayEquals(new String[] {"tension", "N", "3", "2.00000", "1.00000", "1.00000", "3.00000", "0.00000",
-                "5.00000", "0.67"}, rows.get(0));
-        assertArrayEquals(new String[] {"fundamental frequency", "Hz", "1", "10.0000", "-", "10.0000", "10.0000", "-", "-", "-"},
+        assertArrayEquals(new String[] {"tension", "N", "3", "2", "1", "1", "3", "0", "5", "0.67"}, rows.get(0));
+        assertArrayEquals(new String[] {"fundamental frequency", "Hz", "1", "10", "-", "10", "10", "-", "-", "-"},
                 rows.get(1));
     }
 
@@ -34,6 +33,8 @@ class LotRowsTest {
         assertEquals("N m²", rows.get(0)[1]);
         assertEquals("damping ratio of harmonic 1", rows.get(1)[0]);
         assertEquals("no unit", rows.get(1)[1]);
+        // Small values in powers of ten as people write them, never "6.00000e-04".
+        assertEquals("600 × 10⁻⁶", rows.get(0)[3]);
     }
 
     @Test
@@ -42,7 +43,7 @@ class LotRowsTest {
         // the moving ranges are 0, 0, 0, 4, MR-bar = 1, mean 10.8, limits 10.8 +/- 2.6596 = 8.1404 .. 13.4596.
         FigureStatistics f = FigureStatistics.of("f1Hz", "Hz", List.of(10.0, 10.0, 10.0, 10.0, 14.0), Double.NaN,
                 Double.NaN);
-        assertEquals("fundamental frequency: centre 10.8000, control limits 8.14043 .. 13.4596 (mean ± 3 MR-bar/1.128); 1 point(s)"
+        assertEquals("fundamental frequency: centre 10.8, control limits 8.14043 .. 13.4596 (mean ± 3 MR-bar/1.128); 1 point(s)"
                 + " outside: number 5", LotRows.chartSummary(f));
         assertEquals("fundamental frequency: one qualification so far; control limits need two or more",
                 LotRows.chartSummary(FigureStatistics.of("f1Hz", "Hz", List.of(10.0), Double.NaN, Double.NaN)));
