@@ -84,8 +84,9 @@ public final class ModalCaseSuite {
                 number(splitBandwidths), splitBandwidths == 1 ? "" : "s", number(zeta));
         String description = String.format(Locale.ROOT, "%d harmonics, each as two polarisations (planes 25-45 degrees"
                         + " from the force, the upper mode's damping within 10 %% of the lower's) split by %s half-power"
-                        + " bandwidths, damping ratio %s; %s; %s, %.1f lines in the first mode's half-power band; noise"
-                        + " %.0f dB below the weakest peak; %s", DOUBLET_HARMONICS, number(splitBandwidths), number(zeta),
+                        + " bandwidth%s, damping ratio %s; %s; %s, %.1f lines in the first mode's half-power band; noise"
+                        + " %.0f dB below the weakest peak; %s", DOUBLET_HARMONICS, number(splitBandwidths),
+                splitBandwidths == 1 ? "" : "s", number(zeta),
                 quantity.label(), grid.description(), bandwidths[0] / grid.spacingAtHz(regions.get(0)[0]),
                 DOUBLET_PEAK_TO_NOISE_DB, b.stringWords());
         return new ModalCase(name, description, seed, modes, frf, grid, s, grid.frequencyHz()[0],
