@@ -83,7 +83,12 @@ public final class LevelCheckFile {
         double rigTimeS = root.number("rigTimeS");
         boolean completed = root.bool("sweepCompleted");
         return Optional.of(String.format(Locale.ROOT, "Sweep as recorded in %s: %d steps, rig time %s,"
-                        + " wall time %s, %s.", resultJson.getFileName(), steps, ReportText.FORMAT.value(rigTimeS, "s"),
-                ReportText.FORMAT.value(root.number("wallTimeS", Double.NaN), "s"), completed ? "completed" : "stopped before the end"));
+                        + " wall time %s, %s.", resultJson.getFileName(), steps, seconds(rigTimeS),
+                seconds(root.number("wallTimeS", Double.NaN)), completed ? "completed" : "stopped before the end"));
+    }
+
+    /** A duration to a tenth of a second, as a timer reads it; "not determined" when not recorded. */
+    private static String seconds(double s) {
+        return ReportText.FORMAT.value(Double.isFinite(s) ? Math.round(s * 10) / 10.0 : s, "s");
     }
 }

@@ -63,7 +63,7 @@ final class ResultSections {
         }
         s.line("n is the harmonic number (? when a mode could not be numbered), pol. the polarisation of a doublet;"
                 + " A is the real part of the modal constant; u is one standard error. Values are rounded to their"
-                + " uncertainty (GUM 7.2.6); 12.3e-6 means 12.3 x 10^-6.", 7);
+                + " uncertainty (GUM 7.2.6); 12.3e-6 means 12.3 millionths (0.0000123).", 7);
         for (AbsentHarmonic a : r.harmonics().absent()) {
             s.line(String.format(Locale.ROOT, "Harmonic %d (about %s) absent: %s", a.harmonic(), F.value(a.expectedFrequencyHz(), "Hz"),
                     a.explanation()), 8);
@@ -87,7 +87,7 @@ final class ResultSections {
             s.line(String.format(Locale.ROOT, "Tension %s (%s); bending stiffness %s; inharmonicity B %s.",
                     F.withUncertainty(t.tensionN(), t.tensionStdN(), "N"), t.method().label(),
                     F.withUncertainty(t.bendingStiffnessNm2(), t.bendingStiffnessStdNm2(), "N m^2"),
-                    F.number(t.inharmonicityB())), 9);
+                    inharmonicity(r, t)), 9);
             t.crossChecks().forEach(c -> s.line("Cross-check, " + c.method() + ": " + F.value(c.tensionN(), "N"), 8));
             t.warnings().forEach(note -> s.line("Note: " + note, 8));
         } else {
@@ -105,11 +105,18 @@ final class ResultSections {
             l.shifts().forEach(h -> s.line(String.format(Locale.ROOT, "Level check, harmonic %d: %s at the first drive level, %s at"
                             + " the second; relative shift %s (Kirchhoff-Carrier predicts %s).", h.harmonic(),
                     F.value(h.firstFrequencyHz(), "Hz"), F.value(h.secondFrequencyHz(), "Hz"),
-                    F.withUncertainty(h.relativeShift(), h.relativeShiftStd(), ""), F.number(h.predictedRelativeShift())),
+                    F.withUncertainty(h.relativeShift(), h.relativeShiftStd(), ""),
+                    F.valueLike(h.predictedRelativeShift(), h.relativeShiftStd(), "")),
                     9));
             l.findings().forEach(f -> s.line(f, 8));
         });
         return s;
+    }
+
+    /** B with its standard uncertainty when the qualification evaluated one, else as the tension fit gives it. */
+    private static String inharmonicity(QualificationResult r, TensionEstimate t) {
+        Measurement b = r.measurements().get(Figure.INHARMONICITY.key());
+        return b == null ? F.number(t.inharmonicityB()) : F.withUncertainty(b.value(), b.standardUncertainty(), "");
     }
 
     static Section figures(Map<String, Measurement> measurements) {

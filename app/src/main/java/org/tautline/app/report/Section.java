@@ -9,7 +9,8 @@ import java.util.List;
 /**
  * One section of the report, laid out whole: its heading and content are measured first, and the section starts on
  * a new page unless it fits below the cursor (a section taller than a page starts with at least its heading and
- * first lines together). A wrapped paragraph is never split across pages.
+ * first lines together). A wrapped paragraph is never split across pages; a table that runs onto a new page has its
+ * header row written again there.
  */
 final class Section {
     /** Content kept with the heading when a section is taller than a page. */
@@ -21,8 +22,14 @@ final class Section {
         void draw(PageWriter w);
     }
 
+    /** The height of one table row, pt. */
+    private static final float ROW_HEIGHT = 11;
+
     private final String title;
     private final List<Item> items = new ArrayList<>();
+    /** The header row of the table being built, null before the first. */
+    private String[] tableHeader;
+    private float[] tableColumns;
 
     /** @param title the heading; empty for a block without one */
     Section(String title) {
@@ -57,14 +64,35 @@ final class Section {
         return this;
     }
 
+    /**
+     * A table row. A header row starts a table: it is kept on a page with the first row below it, and when a later row
+     * of the table falls on a new page the header is written again at the top of that page, under the section's title
+     * marked "(continued)".
+     */
     Section row(String[] cells, float[] columnsPt, boolean header) {
+        String[] copy = cells.clone();
+        if (header) {
+            tableHeader = copy;
+            tableColumns = columnsPt;
+        }
+        String[] repeated = header ? null : tableHeader;
+        float[] repeatedColumns = tableColumns;
         items.add(new Item() {
             public float height(PageWriter w) {
-                return 11;
+                return ROW_HEIGHT;
             }
 
             public void draw(PageWriter w) {
-                w.row(cells, columnsPt, header);
+                if (header) {
+                    w.keep(2 * ROW_HEIGHT);
+                } else if (repeated != null && w.remaining() < ROW_HEIGHT) {
+                    w.newPage();
+                    if (!title.isEmpty()) {
+                        w.line(title + " (continued)", 8);
+                    }
+                    w.row(repeated, repeatedColumns, true);
+                }
+                w.row(copy, columnsPt, header);
             }
         });
         return this;

@@ -82,10 +82,16 @@ final class TraceSections {
         for (Instrument i : instruments) {
             String status = i.calibrationDue().isEmpty() ? ReportText.NOT_GIVEN
                     : i.calibrationExpiredOn(on) ? "EXPIRED" : "valid";
-            s.row(new String[] {i.role(), i.model().orElse(ReportText.NOT_GIVEN), i.serial().orElse(ReportText.NOT_GIVEN),
+            // A role with a description ("force sensor: full scale 5 N, ...") gives the table its name, and the
+            // description its own line below, so that no text runs into the next column.
+            String[] role = i.role().split(":\\s*", 2);
+            s.row(new String[] {role[0], i.model().orElse(ReportText.NOT_GIVEN), i.serial().orElse(ReportText.NOT_GIVEN),
                     i.calibrationCertificate().orElse(ReportText.NOT_GIVEN),
                     i.calibrationDue().map(LocalDate::toString).orElse(ReportText.NOT_GIVEN), status}, INSTRUMENT_COLUMNS,
                     false);
+            if (role.length > 1 && !role[1].isBlank()) {
+                s.line("    " + role[1], 7);
+            }
         }
         s.line("Calibration is judged valid when its due date is not before " + (setup.testedAt().isPresent()
                 ? "the test date." : "the report date (the run records no test date)."), 8);
