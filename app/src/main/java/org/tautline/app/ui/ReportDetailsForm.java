@@ -44,7 +44,7 @@ final class ReportDetailsForm {
         });
         JPanel p = new JPanel(new MigLayout("insets 0, wrap 3, gapy 4", "[right][grow,fill,260:320:][]"));
         p.add(new JLabel("<html>Facts left empty are printed \"not given\" in the report, never made up.</html>"),
-                "span 3, wmax 560, gapbottom 6");
+                "span 3, left, wmax 560, gapbottom 6");
         p.add(new JLabel("Operator"));
         p.add(operator, "span 2");
         p.add(new JLabel("Report number"));
@@ -64,7 +64,8 @@ final class ReportDetailsForm {
         p.add(rigFile);
         p.add(choose);
         p.add(new JLabel("<html>The rig file gives the instruments' serials and calibration. Without one the report"
-                + " names the rig the sweep ran on, with no instruments.</html>"), "span 3, wmax 560");
+                + (sweepStarted.isPresent() ? " names the rig the sweep ran on, with no instruments."
+                : " gives no rig: the FRF came from a file.") + "</html>"), "span 3, left, wmax 560");
         int answer = JOptionPane.showConfirmDialog(owner, p, "Report details", JOptionPane.OK_CANCEL_OPTION,
                 JOptionPane.PLAIN_MESSAGE);
         if (answer != JOptionPane.OK_OPTION) {
