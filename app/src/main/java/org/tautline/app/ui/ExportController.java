@@ -29,9 +29,9 @@ import org.tautline.driver.sweep.SweepResult;
  * {@link #writeReportFolder} is called on the event thread.
  */
 final class ExportController {
-    private final WorkbenchParts parts;
     /** The report's file name inside the folder it is exported to, as {@code demo --out} names it. */
     static final String REPORT = "report.pdf";
+    private final WorkbenchParts parts;
     private Optional<QualificationResult> shown = Optional.empty();
     private Optional<ResultOrigin> origin = Optional.empty();
 
