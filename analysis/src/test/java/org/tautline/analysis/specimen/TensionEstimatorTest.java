@@ -49,7 +49,7 @@ class TensionEstimatorTest {
         assertTrue(fletcher.method().startsWith("Fletcher 1964"), fletcher.method());
         assertEquals(500, fletcher.tensionN(), 0.5, "Fletcher's approximate clamped formula as a cross-check");
         CrossCheck zui = e.crossChecks().get(2);
-        assertTrue(zui.method().startsWith("Zui"), zui.method());
+        assertTrue(zui.method().endsWith("(Zui, Shinke & Namita 1996)"), zui.method());
         assertEquals(500, zui.tensionN(), 0.03 * 500, "Zui et al. 1996 (from memory) within 3 %");
         assertEquals(4 * 6.1654e-3 * 143.676 * 143.676, e.crossChecks().get(0).tensionN(), 0.01,
                 "Mersenne's law from f1 (checks.md)");
