@@ -1,15 +1,19 @@
 package org.tautline.app.qualify;
 
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Optional;
 
 import org.tautline.analysis.frf.Frf;
 import org.tautline.analysis.modal.ModalEstimator;
 import org.tautline.analysis.modal.ModeSelection;
+import org.tautline.analysis.qualify.Assessment;
 import org.tautline.analysis.qualify.QualificationRequest;
 import org.tautline.analysis.qualify.Qualifier;
 import org.tautline.analysis.specimen.LinearityResult;
 import org.tautline.analysis.specimen.Specimen;
 import org.tautline.analysis.verdict.Specification;
+import org.tautline.analysis.verdict.Verdict;
 import org.tautline.driver.sweep.SweepResult;
 
 /**
@@ -97,6 +101,32 @@ public final class Qualification {
                                                     Optional<Specification> specification) {
         return new QualificationResult(Qualifier.withLevelCheck(result.assessment(), linearity, specification),
                 result.sweep(), result.wallTimeS());
+    }
+
+    /**
+     * Adds cautions that come from outside the FRF (an instrument whose calibration had run out): the verdict, if
+     * any, becomes not determinable with each caution as a reason, before the limits' own; the figures stay as they
+     * are, for the record.
+     *
+     * @param result the qualification
+     * @param cautions plain sentences; none leaves the result as it is
+     * @return the result with the cautions
+     */
+    public static QualificationResult withCautions(QualificationResult result, List<String> cautions) {
+        if (cautions.isEmpty()) {
+            return result;
+        }
+        Assessment a = result.assessment();
+        Optional<Verdict> verdict = a.verdict();
+        for (int i = cautions.size() - 1; i >= 0; i--) {
+            String why = "not determinable: " + cautions.get(i);
+            verdict = verdict.map(v -> v.undetermined(why));
+        }
+        List<String> all = new ArrayList<>(a.cautions());
+        all.addAll(cautions);
+        return new QualificationResult(new Assessment(a.request(), a.receptance(), a.synthesized(), a.modal(), a.modes(),
+                a.harmonics(), a.tension(), a.participation(), a.measurements(), verdict, all), result.sweep(),
+                result.wallTimeS());
     }
 
     private static double secondsSince(long startNs) {

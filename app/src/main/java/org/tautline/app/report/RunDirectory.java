@@ -25,6 +25,7 @@ import org.tautline.app.qualify.QualificationResult;
 import org.tautline.app.qualify.SpecificationFile;
 import org.tautline.app.qualify.SpecimenFile;
 import org.tautline.app.trace.DataFile;
+import org.tautline.app.trace.Calibrations;
 import org.tautline.app.trace.RunSetup;
 import org.tautline.app.trace.SetupFile;
 
@@ -193,6 +194,7 @@ public record RunDirectory(Path directory, QualificationResult result, Map<Strin
         if (in.levelCheck().isPresent()) {
             result = Qualification.withLinearity(result, in.levelCheck().get(), in.specification());
         }
+        result = Qualification.withCautions(result, Calibrations.expired(in.setup(), java.time.Instant.now()));
         return new RunDirectory(in.directory(), result, in.frf().metadata(), in.recordedSweep(), in.frfSha256(),
                 in.setup(), in.dataFiles());
     }

@@ -16,9 +16,11 @@ import javax.swing.SwingWorker;
 import org.tautline.app.qualify.QualificationResult;
 import org.tautline.app.report.QualificationReport;
 import org.tautline.app.report.ReportInfo;
+import org.tautline.app.qualify.Qualification;
 import org.tautline.app.report.RunDirectory;
 import org.tautline.app.report.RunExport;
 import org.tautline.app.report.RunFolderWriter;
+import org.tautline.app.trace.Calibrations;
 import org.tautline.app.trace.RunSetup;
 import org.tautline.app.ui.results.ResultOrigin;
 import org.tautline.driver.sweep.SweepResult;
@@ -101,7 +103,9 @@ final class ExportController {
         boolean sweptHere = result.sweep().isPresent();
         RunSetup setup = details.setup(sweptHere ? from.map(ResultOrigin::madeAt) : Optional.empty(),
                 sweptHere ? from.map(ResultOrigin::rig) : Optional.empty());
-        RunDirectory run = RunFolderWriter.write(folder, result, metadata(result, from), recordedSweep(result), setup);
+        // An instrument whose calibration had run out makes the verdict not determinable, as the command line's does.
+        QualificationResult judged = Qualification.withCautions(result, Calibrations.expired(setup, now));
+        RunDirectory run = RunFolderWriter.write(folder, judged, metadata(judged, from), recordedSweep(judged), setup);
         Path pdf = folder.resolve(REPORT);
         QualificationReport.write(run, new ReportInfo(details.operator(), ReportInfo.SOFTWARE, now,
                 details.reportNumber()), "", List.of(), pdf);

@@ -132,7 +132,9 @@ class ReportCommandTest {
         CliRun run = CliRun.of("report", folder.toString(), "--pdf", pdf.toString(), "--rig-file", rig.toString(),
                 "--temperature-c", "21.5", "--humidity-pct", "45", "--test-date", "2026-11-02T09:14:00Z",
                 "--report-number", "QR-0153");
-        assertEquals(0, run.exitCode(), run.err());
+        // Readings of an instrument out of calibration are not traceable (ISO/IEC 17025:2017, 6.4 and 6.5, from
+        // memory): the demo's PASS becomes not determinable, exit status 11, with the instrument named as the reason.
+        assertEquals(11, run.exitCode(), run.err());
         String text = text(pdf).replace("\n", " ");
         assertTrue(text.contains("Report number: QR-0153"), text);
         assertTrue(text.contains("Tested: 2026-11-02 09:14 UTC"), text);
@@ -141,6 +143,10 @@ class ReportCommandTest {
         assertTrue(text.contains("Calibration expired: response sensor (serial LV-7781) was due on 2026-03-31, before"
                 + " the test"), text);
         assertTrue(text.contains("certificate"), text);
+        assertTrue(text.contains("Verdict: NOT DETERMINABLE Not determinable as a whole: the calibration of the response"
+                + " sensor (serial LV-7781) was due on 2026-03-31, before the test, so its readings are not traceable to a"
+                + " valid calibration"), text);
+        assertTrue(!text.contains("Verdict: PASS"), text);
     }
 
     @Test
