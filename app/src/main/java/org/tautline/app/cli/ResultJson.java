@@ -25,7 +25,13 @@ import org.tautline.driver.sim.TrueMode;
 
 /** The demo outcome as JSON, with SI units in every key. */
 final class ResultJson {
-    static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+    /**
+     * Writes indented JSON with every character beyond ASCII escaped (RFC 8259, section 7: "±" is written
+     * {@code \u00b1}), so the text is the same under any terminal encoding, LANG=C included, and reads back exactly.
+     */
+    static final ObjectMapper MAPPER = com.fasterxml.jackson.databind.json.JsonMapper.builder()
+            .enable(com.fasterxml.jackson.core.json.JsonWriteFeature.ESCAPE_NON_ASCII).build()
+            .enable(SerializationFeature.INDENT_OUTPUT);
 
     private ResultJson() {
     }

@@ -23,7 +23,7 @@ final class SetupOptions {
     @Option(names = "--temperature-c", paramLabel = "C", description = "Air temperature at the specimen during the test, °C.")
     private Double temperatureC;
 
-    @Option(names = "--humidity-pct", paramLabel = "RH", description = "Relative humidity during the test, %.")
+    @Option(names = "--humidity-pct", paramLabel = "RH", description = "Relative humidity during the test, %%.")
     private Double humidityPct;
 
     /**
