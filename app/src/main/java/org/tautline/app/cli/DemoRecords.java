@@ -31,6 +31,9 @@ import org.tautline.driver.sweep.SweepPlan;
 
 /** The demo's records: the rig lines of its FRF file, its report, and its entry in the lot register. */
 final class DemoRecords {
+    private static final org.tautline.analysis.format.QuantityFormat NUMBERS =
+            new org.tautline.analysis.format.QuantityFormat(org.tautline.analysis.format.TextStyle.ASCII);
+
     private DemoRecords() {
     }
 
@@ -108,8 +111,9 @@ final class DemoRecords {
                 Optional.of(new RigDescription(m.get("rig"), instruments)));
     }
 
+    /** A number as the rest of the output writes it (trailing zeros dropped, powers of ten as 1e-6), in ASCII. */
     private static String fmt(double v) {
-        return String.format(Locale.ROOT, "%.4g", v);
+        return NUMBERS.number(v);
     }
 
     /** Appends the run to the lot when asked, then writes DIR/report.pdf (with the lot's charts when a lot is given). */
