@@ -58,7 +58,8 @@ public final class StopSignalBenchmark {
             Path run = work.resolve("run-" + i);
             try (VirtualRigServer rig = VirtualRigServer.startOnPty(SimulationConfigs.demoWire(),
                     VirtualRigSettings.of(921600).withPacing(true))) {
-                Process child = new ProcessBuilder(java, "-cp", System.getProperty("java.class.path"),
+                // env restores SIGINT's default handling, which a shell's background job inherits ignored.
+                Process child = new ProcessBuilder("env", "--default-signal=INT", java, "-cp", System.getProperty("java.class.path"),
                         "org.tautline.app.cli.Main", "sweep", "--rig", "serial:" + rig.hostPath(), "--from", "150", "--to",
                         "300", "--steps", "400", "--settle-cycles", "100", "--cycles", "40", "--no-progress", "--out",
                         run.toString()).redirectErrorStream(true).redirectOutput(work.resolve("out-" + i + ".txt").toFile())

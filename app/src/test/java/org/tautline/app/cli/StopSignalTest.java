@@ -54,7 +54,10 @@ class StopSignalTest {
         Path out = dir.resolve("out.txt");
         try (VirtualRigServer rig = VirtualRigServer.startOnPty(SimulationConfigs.demoWire(), 921600)) {
             String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
-            child = new ProcessBuilder(java, "-cp", System.getProperty("java.class.path"), Main.class.getName(), "sweep",
+            // A process started in the background by a non-interactive shell (as a CI job may be) inherits SIGINT
+            // ignored, and a JVM that starts with SIGINT ignored leaves it so (POSIX, sh "Asynchronous lists", from
+            // memory): coreutils' env restores the default handling, so the child sees Ctrl-C as a person's would.
+            child = new ProcessBuilder("env", "--default-signal=INT", java, "-cp", System.getProperty("java.class.path"), Main.class.getName(), "sweep",
                     "--rig", "serial:" + rig.hostPath(), "--from", "300", "--to", "420", "--steps", "20000",
                     "--settle-cycles", "100", "--cycles", "40", "--no-progress", "--out", run.toString())
                     .redirectErrorStream(true).redirectOutput(out.toFile()).start();
