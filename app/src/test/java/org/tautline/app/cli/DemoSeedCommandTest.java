@@ -48,7 +48,7 @@ class DemoSeedCommandTest {
         assertEquals("DEMO-TW-S0005", ResultJson.MAPPER.readTree(run.resolve("specimen.json").toFile()).get("id").asText());
         List<String> csv = Files.readAllLines(run.resolve("frf.csv"));
         assertTrue(csv.contains("# simulated specimen: specimen 5 of the demo wire's invented lot (seed 5), given a true"
-                + " tension of 170.0 N"), csv.subList(0, 12).toString());
+                + " tension of 170 N"), csv.subList(0, 12).toString());
     }
 
     @Test
