@@ -10,13 +10,11 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import java.util.concurrent.TimeUnit;
-import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.BooleanSupplier;
 
 import javax.imageio.ImageIO;
 import javax.swing.AbstractButton;
 import javax.swing.JDialog;
-import javax.swing.SwingUtilities;
 
 import org.junit.jupiter.api.Assumptions;
 
@@ -39,76 +37,23 @@ public final class SwingDriver {
     }
 
     public static <T> T onEdt(Callable<T> call) throws Exception {
-        AtomicReference<T> result = new AtomicReference<>();
-        AtomicReference<Exception> error = new AtomicReference<>();
-        SwingUtilities.invokeAndWait(() -> {
-            try {
-                result.set(call.call());
-            } catch (Exception e) {
-                error.set(e);
-            }
-        });
-        if (error.get() != null) {
-            throw error.get();
-        }
-        return result.get();
+        return WindowSearch.onEdt(call);
     }
 
     public static void waitFor(String what, double seconds, Callable<Boolean> condition) throws Exception {
-        long deadline = System.nanoTime() + (long) (seconds * 1e9);
-        while (System.nanoTime() < deadline) {
-            if (onEdt(condition)) {
-                return;
-            }
-            Thread.sleep(50);
-        }
-        throw new AssertionError("timed out after " + seconds + " s waiting for " + what);
+        WindowSearch.waitFor(what, seconds, condition);
     }
 
     public static JDialog waitForDialog(String title) throws Exception {
-        AtomicReference<JDialog> found = new AtomicReference<>();
-        waitFor("the dialog '" + title + "'", 10, () -> {
-            for (Window w : Window.getWindows()) {
-                if (w instanceof JDialog d && w.isShowing() && title.equals(d.getTitle())) {
-                    found.set(d);
-                    return true;
-                }
-            }
-            return false;
-        });
-        return found.get();
+        return WindowSearch.waitForDialog(title, 10);
     }
 
     public static <T extends Component> T find(Container root, Class<T> type, String name) {
-        T found = findOrNull(root, type, c -> name.equals(c.getName()));
-        if (found == null) {
-            throw new AssertionError("no " + type.getSimpleName() + " named '" + name + "' in the window");
-        }
-        return found;
+        return WindowSearch.find(root, type, name);
     }
 
     public static AbstractButton findButtonByText(Container root, String text) {
-        AbstractButton b = findOrNull(root, AbstractButton.class, c -> text.equals(((AbstractButton) c).getText()));
-        if (b == null) {
-            throw new AssertionError("no button '" + text + "'");
-        }
-        return b;
-    }
-
-    private static <T extends Component> T findOrNull(Container root, Class<T> type,
-                                                      java.util.function.Predicate<Component> match) {
-        for (Component c : root.getComponents()) {
-            if (type.isInstance(c) && match.test(c)) {
-                return type.cast(c);
-            }
-            if (c instanceof Container inner) {
-                T found = findOrNull(inner, type, match);
-                if (found != null) {
-                    return found;
-                }
-            }
-        }
-        return null;
+        return WindowSearch.findButtonByText(root, text);
     }
 
     /** Paints a window into an image at the screen's scale and saves it as PNG. */
