@@ -63,17 +63,17 @@ public final class Lscf {
      */
     public Lscf(Frf frf, double bandLowHz, double bandHighHz, double[] weightsOrNull, int maxOrder) {
         if (frf == null) {
-            throw new AnalysisException("LSCF needs an FRF, got none");
+            throw new AnalysisException("the pole search needs an FRF, got none");
         }
         if (!(bandLowHz >= 0) || !(bandHighHz > bandLowHz) || Double.isInfinite(bandHighHz)) {
-            throw new AnalysisException("LSCF band must satisfy 0 <= bandLowHz < bandHighHz, both finite, got "
+            throw new AnalysisException("the pole search needs a band from 0 Hz or more up to a higher finite frequency, got "
                     + bandLowHz + " .. " + bandHighHz + " Hz");
         }
         if (maxOrder < 1) {
-            throw new AnalysisException("LSCF maxOrder must be at least 1, got " + maxOrder);
+            throw new AnalysisException("the pole search needs a highest model order of at least 1, got " + maxOrder);
         }
         if (weightsOrNull != null && weightsOrNull.length != frf.size()) {
-            throw new AnalysisException("LSCF weights must have one value per FRF line (" + frf.size() + "), got "
+            throw new AnalysisException("the pole search needs one weight per FRF line (" + frf.size() + "), got "
                     + weightsOrNull.length);
         }
         double[] f = frf.frequenciesHz();
@@ -89,7 +89,7 @@ public final class Lscf {
         }
         int count = end - first;
         if (count == 0) {
-            throw new AnalysisException("LSCF band " + bandLowHz + " .. " + bandHighHz
+            throw new AnalysisException("the pole search band " + bandLowHz + " .. " + bandHighHz
                     + " Hz holds no line of the FRF, whose lines span " + f[0] + " .. " + f[f.length - 1] + " Hz");
         }
         if (count < minimumLines(maxOrder)) {
@@ -109,7 +109,7 @@ public final class Lscf {
             int line = first + i;
             double c = weightsOrNull == null ? 1 : weightsOrNull[line];
             if (!(c >= 0) || Double.isInfinite(c)) {
-                throw new AnalysisException("LSCF weight at line " + line + " (" + f[line]
+                throw new AnalysisException("the pole search weight at line " + line + " (" + f[line]
                         + " Hz) must be zero or positive and finite, got " + c);
             }
             theta[i] = 2 * Math.PI * f[line] * samplingIntervalS;
@@ -120,7 +120,7 @@ public final class Lscf {
             energy += c * c * (re[line] * re[line] + im[line] * im[line]);
         }
         if (!(energy > 0)) {
-            throw new AnalysisException("LSCF found a zero response (or zero weights) at every one of the " + count
+            throw new AnalysisException("the pole search found a zero response (or zero weights) at every one of the " + count
                     + " lines in the band " + bandLowHz + " .. " + bandHighHz + " Hz: there is nothing to fit");
         }
         this.sums = LscfSums.of(theta, bandRe, bandIm, weightSquared, Math.sqrt(energy / weightTotal), maxOrder);
@@ -147,11 +147,11 @@ public final class Lscf {
      */
     public static double[] inverseStdWeights(Frf frf) {
         double[] variance = frf.variance().orElseThrow(() -> new AnalysisException(
-                "LSCF variance weights need an FRF that carries a per-line variance, got none"));
+                "weighting the pole search by the noise needs an FRF that carries a per-line variance, got none"));
         double[] weights = new double[variance.length];
         for (int i = 0; i < variance.length; i++) {
             if (!(variance[i] > 0)) {
-                throw new AnalysisException("LSCF variance weights need a positive variance at every line, line " + i
+                throw new AnalysisException("weighting the pole search by the noise needs a positive variance at every line, line " + i
                         + " (" + frf.frequencyHz(i) + " Hz) has " + variance[i]);
             }
             weights[i] = 1 / Math.sqrt(variance[i]);
@@ -173,8 +173,8 @@ public final class Lscf {
      */
     public List<Pole> poles(int order) {
         if (order < 1 || order > sums.maxOrder()) {
-            throw new AnalysisException("LSCF order must lie in 1 .. " + sums.maxOrder() + " (the maxOrder this "
-                    + "estimator was built for), got " + order);
+            throw new AnalysisException("the pole search's model order must lie in 1 .. " + sums.maxOrder()
+                    + " (the highest order this estimator was built for), got " + order);
         }
         double[] denominator = denominator(order);
         if (denominator == null) {
@@ -184,7 +184,7 @@ public final class Lscf {
         try {
             roots = LscfRoots.ofMonic(denominator);
         } catch (AnalysisException e) {
-            throw new AnalysisException("LSCF of order " + order + " on the " + lineCount + " lines of the band "
+            throw new AnalysisException("the pole search of model order " + order + " on the " + lineCount + " lines of the band "
                     + bandLowHz + " .. " + bandHighHz + " Hz has no poles: " + e.getMessage(), e);
         }
         List<Pole> poles = new ArrayList<>();
@@ -223,14 +223,14 @@ public final class Lscf {
             }
             return new QRDecomposition(m11).getSolver().solve(rhs).toArray();
         } catch (MathRuntimeException e) {
-            throw new AnalysisException("LSCF normal equations of order " + order + " are singular on the "
+            throw new AnalysisException("the pole search's normal equations of model order " + order + " are singular on the "
                     + lineCount + " lines of the band " + bandLowHz + " .. " + bandHighHz
                     + " Hz: lower the order or widen the band", e);
         }
     }
 
     private static AnalysisException tooFewLines(int order, double lowHz, double highHz, int count) {
-        return new AnalysisException("LSCF of order " + order + " needs at least " + minimumLines(order)
+        return new AnalysisException("the pole search of model order " + order + " needs at least " + minimumLines(order)
                 + " frequency lines in the band " + lowHz + " .. " + highHz + " Hz, got " + count);
     }
 

@@ -136,18 +136,21 @@ class LscfTest {
     void reportsTooFewLinesABandWithoutLinesAndAZeroResponse() {
         Frf h = ModalSynthesis.receptance(LscfTestData.oneMode(), LscfTestData.uniformLines(20, 400, 200));
         // Lines 20 + 380 i/199 Hz inside 100 .. 120 Hz: i = 42 .. 52, that is 11 lines; order 20 needs 21.
-        assertEquals("LSCF of order 20 needs at least 21 frequency lines in the band 100.0 .. 120.0 Hz, got 11",
+        assertEquals("the pole search of model order 20 needs at least 21 frequency lines in the band 100.0 .. 120.0 Hz,"
+                + " got 11",
                 assertThrows(AnalysisException.class, () -> new Lscf(h, 100, 120, null, 20)).getMessage());
-        assertEquals("LSCF band 500.0 .. 600.0 Hz holds no line of the FRF, whose lines span 20.0 .. 400.0 Hz",
+        assertEquals("the pole search band 500.0 .. 600.0 Hz holds no line of the FRF, whose lines span 20.0 .. 400.0 Hz",
                 assertThrows(AnalysisException.class, () -> new Lscf(h, 500, 600, null, 4)).getMessage());
-        assertEquals("LSCF band must satisfy 0 <= bandLowHz < bandHighHz, both finite, got 300.0 .. 200.0 Hz",
+        assertEquals("the pole search needs a band from 0 Hz or more up to a higher finite frequency, got 300.0 .. 200.0"
+                + " Hz",
                 assertThrows(AnalysisException.class, () -> new Lscf(h, 300, 200, null, 4)).getMessage());
         Frf zero = LscfTestData.flat(LscfTestData.uniformLines(20, 400, 200), 0);
-        assertEquals("LSCF found a zero response (or zero weights) at every one of the 200 lines in the band 20.0 .. "
-                + "400.0 Hz: there is nothing to fit",
+        assertEquals("the pole search found a zero response (or zero weights) at every one of the 200 lines in the band"
+                + " 20.0 .. 400.0 Hz: there is nothing to fit",
                 assertThrows(AnalysisException.class, () -> new Lscf(zero, 20, 400, null, 4)).getMessage());
         Lscf lscf = new Lscf(h, 20, 400, null, 8);
-        assertEquals("LSCF order must lie in 1 .. 8 (the maxOrder this estimator was built for), got 10",
+        assertEquals("the pole search's model order must lie in 1 .. 8 (the highest order this estimator was built for),"
+                + " got 10",
                 assertThrows(AnalysisException.class, () -> lscf.poles(10)).getMessage());
     }
 
