@@ -83,7 +83,8 @@ public final class CramerRaoBound {
                 c++;
             }
         }
-        int p = ModalRefinementModel.parameterCount(modes.size(), o.realModes(), o.upperResidual(), o.lowerResidual());
+        int p = ModalRefinementModel.parameterCount(modes.size(), o.realModes(), o.upperResidual(), o.lowerResidual())
+                + 2 * residualTerms.outsideBand().size();
         if (2 * count < p) {
             throw new AnalysisException("the Cramer-Rao bound has " + p + " real unknowns but only " + count + " lines ("
                     + 2 * count + " real values) in the band");

@@ -26,7 +26,8 @@ import org.tautline.analysis.frf.Frf;
  * {@link Mode} model A/D with a complex constant that {@link ModalSynthesis} and {@link ModalRefinement}
  * use; the pure pair form with a complex residue would instead put a real multiple of jw/D beside 1/D, a
  * model that a {@link Mode} cannot hold. Both agree for real modes and near resonance.
- * Upper residual: columns 1 and j; lower residual: -1/w^2 and -j/w^2.
+ * Upper residual: columns 1 and j; lower residual: -1/w^2 and -j/w^2; a fixed pole outside the band (see
+ * {@link LsfdOptions#outsideBandPoles()}): 1/D and j/D, a complex coefficient on its receptance form.
  *
  * <p>The solve is Householder QR on column-scaled data with an SVD of the triangular factor, stable for
  * close modes; a system whose scaled condition number exceeds 1e12 is reported, not solved.
@@ -52,7 +53,9 @@ public final class Lsfd {
         checkPoles(poles);
         LsfdLines lines = LsfdLines.select(WHAT, frf, options.fromHz(), options.toHz(), options.weights());
         int perMode = options.realModes() ? 1 : 2;
-        int unknowns = perMode * poles.size() + (options.upperResidual() ? 2 : 0) + (options.lowerResidual() ? 2 : 0);
+        List<Pole> outside = options.outsideBandPoles();
+        int unknowns = perMode * poles.size() + (options.upperResidual() ? 2 : 0) + (options.lowerResidual() ? 2 : 0)
+                + 2 * outside.size();
         FitQuality.requireFittable(WHAT, lines.size(), unknowns, lines.peakMagnitude(), lines.minimumMagnitude());
         int m = lines.size();
         double[][] columns = new double[unknowns][2 * m];
@@ -78,7 +81,13 @@ public final class Lsfd {
             if (options.lowerResidual()) {
                 double g = -1 / (w * w);
                 put(columns[c++], k, root, g, 0);
-                put(columns[c], k, root, 0, g);
+                put(columns[c++], k, root, 0, g);
+            }
+            for (Pole pole : outside) {
+                double wn = pole.angularFrequencyRadPerS();
+                Complex inverse = new Complex(wn * wn - w * w, -2 * pole.real() * w).reciprocal();
+                put(columns[c++], k, root, inverse.getReal(), inverse.getImaginary());
+                put(columns[c++], k, root, -inverse.getImaginary(), inverse.getReal());
             }
         }
         LsfdLeastSquares solve = LsfdLeastSquares.solve(columns, rhs);
@@ -104,8 +113,14 @@ public final class Lsfd {
         }
         if (options.lowerResidual()) {
             lower = new Complex(x[c], x[c + 1]);
+            c += 2;
         }
-        return new LsfdResult(modes, new ResidualTerms(upper, lower), m, solve.conditionNumber());
+        List<Mode> beyond = new ArrayList<>();
+        for (Pole pole : outside) {
+            beyond.add(new Mode(pole.frequencyHz(), pole.dampingRatio(), new Complex(x[c], x[c + 1])));
+            c += 2;
+        }
+        return new LsfdResult(modes, new ResidualTerms(upper, lower, beyond), m, solve.conditionNumber());
     }
 
     /**

@@ -1,6 +1,7 @@
 package org.tautline.analysis.modal;
 
 import java.util.Arrays;
+import java.util.List;
 
 import org.tautline.analysis.AnalysisException;
 
@@ -16,10 +17,13 @@ import org.tautline.analysis.AnalysisException;
  * <li>{@code fromHz}, {@code toHz} (Hz, default 0 and +infinity): the band of lines used, inclusive.</li>
  * <li>{@code weights} (one relative weight per FRF line, default none): when absent, lines are weighted
  *     by 1/variance if the FRF carries its variance, else uniformly.</li>
+ * <li>{@code outsideBandPoles} (poles, default none): fixed poles outside the band, each with a fitted complex
+ *     coefficient, standing for modes just beyond the band's edges (see {@link ResidualTerms}).</li>
  * </ul>
  */
 public final class LsfdOptions {
-    private static final LsfdOptions DEFAULTS = new LsfdOptions(false, false, false, 0, Double.POSITIVE_INFINITY, null);
+    private static final LsfdOptions DEFAULTS = new LsfdOptions(false, false, false, 0, Double.POSITIVE_INFINITY, null,
+            List.of());
 
     private final boolean realModes;
     private final boolean upperResidual;
@@ -27,9 +31,11 @@ public final class LsfdOptions {
     private final double fromHz;
     private final double toHz;
     private final double[] weights;
+    private final List<Pole> outsideBandPoles;
 
     private LsfdOptions(boolean realModes, boolean upperResidual, boolean lowerResidual, double fromHz, double toHz,
-                        double[] weights) {
+                        double[] weights, List<Pole> outsideBandPoles) {
+        this.outsideBandPoles = List.copyOf(outsideBandPoles);
         this.realModes = realModes;
         this.upperResidual = upperResidual;
         this.lowerResidual = lowerResidual;
@@ -48,7 +54,7 @@ public final class LsfdOptions {
      * @return new options
      */
     public LsfdOptions withRealModes(boolean real) {
-        return new LsfdOptions(real, upperResidual, lowerResidual, fromHz, toHz, weights);
+        return new LsfdOptions(real, upperResidual, lowerResidual, fromHz, toHz, weights, outsideBandPoles);
     }
 
     /**
@@ -56,7 +62,7 @@ public final class LsfdOptions {
      * @return new options
      */
     public LsfdOptions withUpperResidual(boolean fit) {
-        return new LsfdOptions(realModes, fit, lowerResidual, fromHz, toHz, weights);
+        return new LsfdOptions(realModes, fit, lowerResidual, fromHz, toHz, weights, outsideBandPoles);
     }
 
     /**
@@ -64,7 +70,7 @@ public final class LsfdOptions {
      * @return new options
      */
     public LsfdOptions withLowerResidual(boolean fit) {
-        return new LsfdOptions(realModes, upperResidual, fit, fromHz, toHz, weights);
+        return new LsfdOptions(realModes, upperResidual, fit, fromHz, toHz, weights, outsideBandPoles);
     }
 
     /**
@@ -74,7 +80,7 @@ public final class LsfdOptions {
      */
     public LsfdOptions withBandHz(double bandFromHz, double bandToHz) {
         checkBand(bandFromHz, bandToHz);
-        return new LsfdOptions(realModes, upperResidual, lowerResidual, bandFromHz, bandToHz, weights);
+        return new LsfdOptions(realModes, upperResidual, lowerResidual, bandFromHz, bandToHz, weights, outsideBandPoles);
     }
 
     /**
@@ -83,7 +89,15 @@ public final class LsfdOptions {
      */
     public LsfdOptions withWeights(double[] lineWeights) {
         return new LsfdOptions(realModes, upperResidual, lowerResidual, fromHz, toHz,
-                lineWeights == null ? null : lineWeights.clone());
+                lineWeights == null ? null : lineWeights.clone(), outsideBandPoles);
+    }
+
+    /**
+     * @param poles fixed poles outside the band whose coefficients are fitted (copied), possibly none
+     * @return new options
+     */
+    public LsfdOptions withOutsideBandPoles(List<Pole> poles) {
+        return new LsfdOptions(realModes, upperResidual, lowerResidual, fromHz, toHz, weights, poles);
     }
 
     static void checkBand(double bandFromHz, double bandToHz) {
@@ -117,6 +131,11 @@ public final class LsfdOptions {
         return toHz;
     }
 
+    /** @return the fixed poles outside the band, possibly none */
+    public List<Pole> outsideBandPoles() {
+        return outsideBandPoles;
+    }
+
     /** @return a copy of the relative weights, or null for automatic weights */
     public double[] weights() {
         return weights == null ? null : weights.clone();
@@ -126,6 +145,7 @@ public final class LsfdOptions {
     public String toString() {
         return "LsfdOptions[realModes=" + realModes + ", upperResidual=" + upperResidual + ", lowerResidual="
                 + lowerResidual + ", band=" + fromHz + ".." + toHz + " Hz, weights="
-                + (weights == null ? "automatic" : Arrays.toString(weights)) + "]";
+                + (weights == null ? "automatic" : Arrays.toString(weights)) + ", outsideBandPoles=" + outsideBandPoles
+                + "]";
     }
 }

@@ -15,10 +15,13 @@ import java.util.Optional;
  * @param bandLowHz lowest frequency fitted, Hz
  * @param bandHighHz highest frequency fitted, Hz
  * @param warnings plain sentences about anything a technician should know (a refinement that did not converge, ...)
+ * @param unexplained why the model does not explain the measured FRF after the fit's own search for missing poles,
+ *        one plain sentence (also among the warnings); empty when the residual is what the noise explains. A
+ *        qualification treats it as a reason the result cannot be trusted.
  */
 public record ModalEstimate(List<FittedMode> modes, ResidualTerms residualTerms, ResidualTerms residualTermsStd,
                             Optional<FitQuality> quality, StabilisationChart chart, ModeSelection selection,
-                            double bandLowHz, double bandHighHz, List<String> warnings) {
+                            double bandLowHz, double bandHighHz, List<String> warnings, Optional<String> unexplained) {
 
     /** Copies the lists. */
     public ModalEstimate {

@@ -3,6 +3,7 @@ package org.tautline.analysis.modal;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 
 import org.hipparchus.complex.Complex;
@@ -26,8 +27,14 @@ import org.tautline.analysis.frf.FrfQuantity;
  * fixed rules; a user may still add or drop poles by refitting from an edited {@link ModeSelection}.
  */
 public final class ModalEstimator {
-    /** Highest model order of the stabilisation chart. */
+    /** Highest model order of the stabilisation chart for a band of up to a dozen resonance peaks. */
     public static final int MAX_ORDER = 64;
+    /** Highest model order of the stabilisation chart for a band of many peaks. */
+    public static final int MOST_ORDER = 160;
+    /** Orders beyond four per peak. */
+    private static final int SPARE_ORDERS = 16;
+    /** Prominence of a resonance peak over the local noise, in its standard deviations. */
+    private static final double PEAK_SIGMAS = 6;
     /**
      * A fitted mode whose half-power band 2 zeta f is narrower than this fraction of the local line
      * spacing is left out: the data cannot resolve it, and such a "mode" is how a fit absorbs one
@@ -100,12 +107,59 @@ public final class ModalEstimator {
                     + " .. " + high + " Hz, got " + lines);
         }
         // LSCF of order n needs n + 1 lines (Lscf.minimumLines); keep the orders even.
-        int maxOrder = Math.min(MAX_ORDER, (lines - 1) / ORDER_STEP * ORDER_STEP);
+        int maxOrder = Math.min(highestOrder(h, NoiseFloor.of(h), low, high), (lines - 1) / ORDER_STEP * ORDER_STEP);
         Lscf lscf = new Lscf(h, low, high, null, maxOrder);
-        LsfdOptions lsfd = lsfdOptions(h, low, high, false);
+        LsfdOptions lsfd = lsfdOptions(low, high);
         StabilisationChart chart = StabilisationChart.build(lscf, Math.min(MIN_ORDER, maxOrder), maxOrder, ORDER_STEP,
                 poles -> residuesOfPlausible(h, poles, lsfd));
         return fit(h, ModeSelection.automatic(chart), chart, low, high);
+    }
+
+    /**
+     * The highest model order of the chart: {@value #MAX_ORDER}, or more where the band holds many resonance peaks:
+     * 4 per peak (a peak may hide a doublet, and each mode takes two orders) and {@value #SPARE_ORDERS} for the modes
+     * beyond the band, at most {@value #MOST_ORDER}. The chart's columns must stand in a quarter of its orders, so a
+     * band of 24 modes needs orders well past 48 to show them.
+     */
+    private static int highestOrder(Frf h, double[] noise, double low, double high) {
+        int wanted = (4 * peakCount(h, noise, low, high) + SPARE_ORDERS) / ORDER_STEP * ORDER_STEP;
+        return Math.max(MAX_ORDER, Math.min(MOST_ORDER, wanted));
+    }
+
+    /**
+     * The resonance peaks of the band: local maxima of |H| whose prominence (the height above the higher of the lowest
+     * points between them and the nearest higher line on each side) exceeds both {@value #PEAK_SIGMAS} standard
+     * deviations of the line's noise ({@link NoiseFloor}, local, so a noise that grows across the band does not
+     * make peaks of itself) and 1 dB of the peak, the rule of {@link PeakPicking}.
+     */
+    static int peakCount(Frf h, double[] noise, double low, double high) {
+        int n = h.size();
+        int count = 0;
+        double oneDb = 1 - Math.pow(10, -1.0 / 20);
+        for (int k = 1; k < n - 1; k++) {
+            double f = h.frequencyHz(k);
+            double m = h.magnitude(k);
+            if (f < low || f > high || !(m > h.magnitude(k - 1) && m >= h.magnitude(k + 1))) {
+                continue;
+            }
+            double base = Math.max(lowestTowardsHigher(h, k, -1), lowestTowardsHigher(h, k, 1));
+            double prominence = m - base;
+            if (prominence > PEAK_SIGMAS * Math.sqrt(noise[k]) && prominence > oneDb * m) {
+                count++;
+            }
+        }
+        return count;
+    }
+
+    private static double lowestTowardsHigher(Frf h, int peak, int step) {
+        double lowest = h.magnitude(peak);
+        for (int j = peak + step; j >= 0 && j < h.size(); j += step) {
+            if (h.magnitude(j) > h.magnitude(peak)) {
+                break;
+            }
+            lowest = Math.min(lowest, h.magnitude(j));
+        }
+        return lowest;
     }
 
     /**
@@ -135,82 +189,145 @@ public final class ModalEstimator {
     }
 
     private ModalEstimate fit(Frf h, ModeSelection selection, StabilisationChart chart, double low, double high) {
-        List<Pole> poles = selection.poles();
-        if (poles.isEmpty()) {
-            return new ModalEstimate(List.of(), ResidualTerms.NONE, ResidualTerms.NONE, Optional.empty(), chart,
-                    selection, low, high, List.of());
-        }
         List<String> warnings = new ArrayList<>();
         int asked = chart.orders().size() + chart.skippedOrders().size();
         if (SKIPPED_ORDERS_THAT_MATTER * chart.skippedOrders().size() > asked) {
-            warnings.add(String.format(java.util.Locale.ROOT, "the resonances of %d of the %d model orders tried could"
+            warnings.add(String.format(Locale.ROOT, "the resonances of %d of the %d model orders tried could"
                     + " not be computed, so the choice of modes rests on fewer orders than usual",
                     chart.skippedOrders().size(), asked));
         }
-        LsfdResult start = Lsfd.fit(h, poles, lsfdOptions(h, low, high, false));
-        boolean weighted = h.variance().isPresent();
-        ModalRefinementOptions refine = ModalRefinementOptions.of(lsfdOptions(h, low, high, weighted));
+        double[] noise = NoiseFloor.of(h);
+        double[] judged = NoiseFloor.judged(h, noise);
+        boolean estimatedNoise = h.variance().isEmpty();
+        LsfdOptions base = lsfdOptions(low, high);
+        List<Pole> poles = selection.poles();
+        if (poles.isEmpty()) {
+            List<Pole> peaks = peaksOf(h, low, high);
+            if (peaks.isEmpty()) {
+                Optional<String> unexplained = BackgroundFit.unexplained(h, judged, low, high, estimatedNoise);
+                unexplained.ifPresent(warnings::add);
+                return new ModalEstimate(List.of(), ResidualTerms.NONE, ResidualTerms.NONE, Optional.empty(), chart,
+                        selection, low, high, warnings, unexplained);
+            }
+            for (Pole p : peaks) {
+                selection = selection.withFoundInResidual(p);
+                warnings.add(String.format(Locale.ROOT, "no mode stood out on the stabilisation chart; the resonance"
+                        + " near %.4g Hz was taken from the peak of the response", p.frequencyHz()));
+            }
+            poles = selection.poles();
+        }
         List<FittedMode> modes;
+        List<Mode> model;
         ResidualTerms residuals;
         ResidualTerms residualsStd;
+        Optional<String> unexplained;
         try {
-            ModalRefinementResult refined = ModalRefinement.refine(h, start.modes(), start.residualTerms(), refine);
-            if (weighted) {
-                ModalResidualSearch.Outcome found = ModalResidualSearch.search(h, low, high, refined, refine);
-                refined = found.refined();
-                for (Pole p : found.added()) {
-                    selection = selection.withFoundInResidual(p);
-                    warnings.add(String.format(java.util.Locale.ROOT, "a mode near %.4g Hz was missed by the "
-                            + "stabilisation chart and added because the fit left a residual far above the noise there",
-                            p.frequencyHz()));
-                }
+            ModalFit.Refined first = ModalFit.refine(h, noise, poles, base);
+            if (estimatedNoise) {
+                noise = NoiseFloor.fromResidual(noise, FitResidual.of(h, noise, ModalFit.plain(first.refined()),
+                        first.refined().residualTerms()).residual(), h, low, high);
+                first = ModalFit.refine(h, noise, ModalCandidate.poles(first.refined()), base);
+                judged = NoiseFloor.judged(h, noise);
+            }
+            List<Double> outsideAtFirst = outside(first.refined(), low, high);
+            ModalFit.Searched searched = ModalFit.search(h, noise, judged, low, high, first, base);
+            ModalRefinementResult refined = searched.refined().refined();
+            for (Pole p : searched.added()) {
+                selection = selection.withFoundInResidual(p);
+                warnings.add(String.format(Locale.ROOT, "a mode near %.4g Hz was missed by the stabilisation chart and"
+                        + " added because the fit left a residual far above the noise there", p.frequencyHz()));
+            }
+            for (double f : searched.splitHz()) {
+                warnings.add(String.format(Locale.ROOT, "the mode near %.4g Hz was fitted as two close modes because one"
+                        + " mode left a residual far above the noise around it", f));
+            }
+            for (double f : outsideAtFirst) {
+                warnings.add(String.format(Locale.ROOT, "a mode refined to %.4g Hz, outside the band %.4g .. %.4g Hz,"
+                        + " was left out of the modes (it still stands for the response beyond the band)", f, low, high));
             }
             modes = refined.modes();
+            model = ModalFit.plain(refined);
             residuals = refined.residualTerms();
             residualsStd = refined.residualTermsStd();
         } catch (AnalysisException e) {
             warnings.add("the joint refinement failed (" + e.getMessage() + "); the modes are the LSCF/LSFD estimates"
                     + " and carry no standard errors");
+            LsfdResult start = Lsfd.fit(h, poles, base);
             modes = withoutErrors(start.modes());
+            model = start.modes();
             residuals = start.residualTerms();
             residualsStd = ResidualTerms.NONE;
         }
+        unexplained = FitCheck.unexplained(h, judged, low, high, model, residuals, estimatedNoise);
+        unexplained.ifPresent(warnings::add);
         List<FittedMode> kept = new ArrayList<>();
+        List<Mode> outsideBand = new ArrayList<>(residuals.outsideBand());
         for (FittedMode m : modes) {
             double f = m.mode().frequencyHz();
             double bandwidthHz = 2 * m.mode().dampingRatio() * f;
             double spacingHz = localSpacingHz(h, f);
             if (f < low || f > high) {
-                warnings.add(String.format(java.util.Locale.ROOT,
-                        "a mode refined to %.4g Hz, outside the band %.4g .. %.4g Hz, was left out", f, low, high));
+                outsideBand.add(m.mode());
             } else if (!isResolved(h, m.mode())) {
-                warnings.add(String.format(java.util.Locale.ROOT,
+                warnings.add(String.format(Locale.ROOT,
                         "a mode at %.4g Hz narrower (half-power band %.3g Hz) than half the line spacing (%.3g Hz) was left"
                                 + " out: it cannot be told from a single bad line", f, bandwidthHz, spacingHz));
             } else {
                 kept.add(m);
             }
         }
+        residuals = residuals.withOutsideBand(outsideBand);
         kept.sort(java.util.Comparator.comparingDouble(m -> m.mode().frequencyHz()));
         List<Mode> plain = kept.stream().map(FittedMode::mode).toList();
         Optional<FitQuality> quality = plain.isEmpty() ? Optional.empty()
                 : Optional.of(FitQuality.of(bandOf(h, low, high), plain, residuals, 3.0));
-        return new ModalEstimate(kept, residuals, residualsStd, quality, chart, selection, low, high, warnings);
+        return new ModalEstimate(kept, residuals, residualsStd, quality, chart, selection, low, high, warnings,
+                unexplained);
     }
 
-    private LsfdOptions lsfdOptions(Frf h, double low, double high, boolean varianceWeights) {
-        LsfdOptions o = LsfdOptions.defaults().withRealModes(!complexModes).withUpperResidual(true)
-                .withLowerResidual(true).withBandHz(low, high);
-        if (varianceWeights) {
-            double[] variance = h.variance().orElseThrow();
-            double[] w = new double[variance.length];
-            double floor = Arrays.stream(variance).filter(v -> v > 0).min().orElse(1.0);
-            for (int i = 0; i < w.length; i++) {
-                w[i] = 1.0 / Math.max(variance[i], floor);
-            }
-            o = o.withWeights(w);
+    /**
+     * The resonance peaks of the band as start poles, for a band whose stabilisation chart holds no column (a narrow
+     * band has few lines, so few model orders): {@link PeakPicking} on the band's lines, peaks within
+     * {@link ModeSelection#EDGE_GUARD} of an edge and implausible damping left out.
+     */
+    private static List<Pole> peaksOf(Frf h, double low, double high) {
+        Frf band = bandOf(h, low, high);
+        if (band.size() < PeakPicking.MINIMUM_LINES) {
+            return List.of();
         }
-        return o;
+        double guard = ModeSelection.EDGE_GUARD * (high - low);
+        List<Pole> out = new ArrayList<>();
+        List<PeakEstimate> found;
+        try {
+            found = PeakPicking.estimate(band);
+        } catch (AnalysisException e) {
+            return List.of();
+        }
+        for (Mode m : PeakPicking.modes(found)) {
+            double f = m.frequencyHz();
+            if (m.dampingRatio() > 0 && m.dampingRatio() < ModeSelection.MAX_DAMPING_RATIO && f >= low + guard
+                    && f <= high - guard) {
+                out.add(Pole.of(f, m.dampingRatio()));
+            }
+        }
+        return out;
+    }
+
+    private static List<Double> outside(ModalRefinementResult fit, double low, double high) {
+        List<Double> out = new ArrayList<>();
+        for (FittedMode m : fit.modes()) {
+            double f = m.mode().frequencyHz();
+            if (f < low || f > high) {
+                out.add(f);
+            }
+        }
+        return out;
+    }
+
+    /** Real or complex modes, both residual terms, the band; no weights (the fit adds its own). */
+    private LsfdOptions lsfdOptions(double low, double high) {
+        return LsfdOptions.defaults().withRealModes(!complexModes).withUpperResidual(true).withLowerResidual(true)
+                .withBandHz(low, high);
     }
 
     /**

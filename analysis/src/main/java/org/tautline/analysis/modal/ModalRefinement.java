@@ -50,7 +50,8 @@ public final class ModalRefinement {
         LsfdOptions o = options.lines();
         LsfdLines lines = LsfdLines.select(WHAT, frf, o.fromHz(), o.toHz(), o.weights());
         int m = lines.size();
-        int p = ModalRefinementModel.parameterCount(start.size(), o.realModes(), o.upperResidual(), o.lowerResidual());
+        int p = ModalRefinementModel.parameterCount(start.size(), o.realModes(), o.upperResidual(), o.lowerResidual())
+                + 2 * startResidualTerms.outsideBand().size();
         FitQuality.requireFittable(WHAT, m, p, lines.peakMagnitude(), lines.minimumMagnitude());
         if (!lines.absolute() && 2 * m == p) {
             throw new AnalysisException(WHAT + " has " + p + " real unknowns and " + m + " lines (" + 2 * m

@@ -16,7 +16,9 @@ import org.hipparchus.complex.Complex;
  * <p>Scaled parameters, all of order one at the start: per mode p_f with w_r = w0_r p_f (relative frequency),
  * p_z with zeta_r = zeta0_r exp(p_z) (log damping, which keeps zeta positive), p_a (and p_b for complex modes)
  * with A_r = |A0_r| (p_a + j p_b); then UR = u (p + j q) and LR = u w_lo^2 (p + j q), u the scale of |H| and
- * w_lo the lowest line. Each line's real and imaginary parts are stacked and multiplied by sqrt(weight).
+ * w_lo the lowest line; then for each fixed pole outside the band (held in the start residual terms, see
+ * {@link ResidualTerms#outsideBand()}) its complex coefficient B_q = s_q (p + j q) on 1/D_q, s_q its start size.
+ * Each line's real and imaginary parts are stacked and multiplied by sqrt(weight).
  */
 final class ModalRefinementModel {
     private final double[] w;
@@ -29,6 +31,8 @@ final class ModalRefinementModel {
     private final double[] aScale;
     private final double upperScale;
     private final double lowerScale;
+    private final List<Mode> outside;
+    private final double[] outsideScale;
     private final double[] start;
 
     ModalRefinementModel(double[] angularFrequencyRadPerS, double[] weight, List<Mode> modes, ResidualTerms residuals,
@@ -48,7 +52,9 @@ final class ModalRefinementModel {
         this.upperScale = magnitudeScale;
         double wLow = w[0];
         this.lowerScale = magnitudeScale * wLow * wLow;
-        this.start = new double[parameterCount(n, realModes, upper, lower)];
+        this.outside = residuals.outsideBand();
+        this.outsideScale = new double[outside.size()];
+        this.start = new double[parameterCount(n, realModes, upper, lower) + 2 * outside.size()];
         int c = 0;
         for (int r = 0; r < n; r++) {
             Mode mode = modes.get(r);
@@ -69,7 +75,15 @@ final class ModalRefinementModel {
         }
         if (lower) {
             start[c++] = residuals.lower().getReal() / lowerScale;
-            start[c] = residuals.lower().getImaginary() / lowerScale;
+            start[c++] = residuals.lower().getImaginary() / lowerScale;
+        }
+        for (int q = 0; q < outside.size(); q++) {
+            Mode o = outside.get(q);
+            double wq = o.angularFrequencyRadPerS();
+            double size = o.modalConstant().norm();
+            outsideScale[q] = size > 0 ? size : magnitudeScale * 2 * Math.max(o.dampingRatio(), 1e-3) * wq * wq;
+            start[c++] = o.modalConstant().getReal() / outsideScale[q];
+            start[c++] = o.modalConstant().getImaginary() / outsideScale[q];
         }
     }
 
@@ -131,7 +145,13 @@ final class ModalRefinementModel {
                 double g = -lowerScale / (wk * wk);
                 sum = sum.add(new Complex(g * p[c], g * p[c + 1]));
                 put(columns[c++], k, sq, new Complex(g, 0));
-                put(columns[c], k, sq, new Complex(0, g));
+                put(columns[c++], k, sq, new Complex(0, g));
+            }
+            for (int q = 0; q < outside.size(); q++) {
+                Complex basis = outsideBasis(q, wk);
+                sum = sum.add(basis.multiply(new Complex(p[c], p[c + 1])));
+                put(columns[c++], k, sq, basis);
+                put(columns[c++], k, sq, basis.multiply(Complex.I));
             }
             if (values != null) {
                 values[2 * k] = sq * sum.getReal();
@@ -176,11 +196,25 @@ final class ModalRefinementModel {
                 double g = -lowerScale / (wk * wk);
                 re += g * p[c];
                 im += g * p[c + 1];
+                c += 2;
+            }
+            for (int q = 0; q < outside.size(); q++) {
+                Complex term = outsideBasis(q, wk).multiply(new Complex(p[c], p[c + 1]));
+                re += term.getReal();
+                im += term.getImaginary();
+                c += 2;
             }
             values[2 * k] = root[k] * re;
             values[2 * k + 1] = root[k] * im;
         }
         return values;
+    }
+
+    /** The scaled receptance basis of fixed outside pole q at w: scale/(w_q^2 - w^2 + 2 j zeta_q w_q w). */
+    private Complex outsideBasis(int q, double wk) {
+        Mode o = outside.get(q);
+        double wq = o.angularFrequencyRadPerS();
+        return new Complex(wq * wq - wk * wk, 2 * o.dampingRatio() * wq * wk).reciprocal().multiply(outsideScale[q]);
     }
 
     private static void put(double[] column, int k, double sq, Complex value) {
@@ -236,8 +270,15 @@ final class ModalRefinementModel {
         }
         if (lower) {
             lr = pick(p, covariance, c, lowerScale);
+            c += 2;
         }
-        return new ResidualTerms(ur, lr);
+        List<Mode> beyond = new ArrayList<>();
+        for (int q = 0; q < outside.size(); q++) {
+            Mode o = outside.get(q);
+            beyond.add(new Mode(o.frequencyHz(), o.dampingRatio(), pick(p, covariance, c, outsideScale[q])));
+            c += 2;
+        }
+        return new ResidualTerms(ur, lr, beyond);
     }
 
     private static Complex pick(double[] p, double[][] covariance, int c, double scale) {

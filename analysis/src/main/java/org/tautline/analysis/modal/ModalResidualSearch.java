@@ -18,19 +18,20 @@ import org.tautline.analysis.frf.Frf;
  * (S. M. Kay, Fundamentals of Statistical Signal Processing: Detection Theory, 1998, ch. 2, from memory).
  * P(sum &gt; {@link #THRESHOLD}) is about 4e-9, so over 10^5 windows a false alarm has odds near 4e-4.
  *
- * <p>Each round ranks the windows whose sum exceeds the threshold, strongest first, keeping a window only where no
+ * <p>Each round ranks the windows whose sum exceeds the threshold and whose misfit is material (at least
+ * {@link ModalCandidate#MATERIAL} of the response over the window), strongest first, keeping a window only where no
  * stronger peak already ranked would by itself stay above the detection level: a resonance of peak level P and
  * half-power half-width zeta f keeps |e|^2 above THRESHOLD/WINDOW out to zeta f sqrt(P WINDOW/THRESHOLD - 1) from
  * its peak (and at least {@link ModalResidualStart#FIRST_LINES}/2 lines). One pole is put at the line of largest
  * residual in the first window with the damping ratio of the nearest fitted mode (close modes of one specimen damp
  * alike; a string's two polarisations nearly equally), and LSFD and the joint refinement are rerun with all poles.
- * The new model is kept when the refinement succeeds and its cost falls by more than the threshold as well. If not,
+ * The new model is kept when {@link ModalCandidate#better} says its cost fell far enough. If not,
  * the pole of {@link ModalResidualStart} (a one-pole fit of the residual around that line) is tried from the same
  * window, then that pole together with the local pole of the strongest line within the window's reach but outside
  * two half-power half-widths of the first (a pair missing together, whose one added pole cannot settle while its
  * partner's residual pulls at it), then the next window, up to {@link #TRIES_PER_ROUND} windows. The neighbour's
  * damping goes first because a local one-pole fit over an unresolved doublet returns one broad pole between its
- * modes. A candidate's refinement gets at most {@link #CANDIDATE_ITERATIONS} iterations. A round adds one pole,
+ * modes. A round adds one pole,
  * or one pair, so a close partner of a found mode waits for the next round's residual. The search
  * stops when a round adds nothing or {@link #MAX_ADDED} modes have been added. Fitting, inspecting the residual
  * and adding a mode is the usual manual practice (D. J. Ewins, Modal Testing, 2nd ed. 2000, ch. 4, from memory);
@@ -40,17 +41,12 @@ import org.tautline.analysis.frf.Frf;
 final class ModalResidualSearch {
     /** Adjacent lines summed by the detector. */
     static final int WINDOW = 5;
-    /** Window sum of |e_k|^2 (and drop in refined cost) that marks a missed mode. */
-    static final double THRESHOLD = 30;
+    /** Window sum of |e_k|^2 that marks a missed mode (the fall of the refined cost is {@link ModalCandidate}'s). */
+    static final double THRESHOLD = ModalCandidate.THRESHOLD;
     /** Most modes added to one fit. */
     static final int MAX_ADDED = 10;
     /** Residual peaks tried, strongest first, before a round gives up. */
     static final int TRIES_PER_ROUND = 4;
-    /**
-     * Refinement iterations allowed a candidate model: one that needs more rarely lowers the cost enough to be
-     * kept, and its failures dominated the worst-case time.
-     */
-    static final int CANDIDATE_ITERATIONS = 50;
 
     /**
      * The outcome of a search.
@@ -77,15 +73,51 @@ final class ModalResidualSearch {
     static Outcome search(Frf h, double lowHz, double highHz, ModalRefinementResult fit, ModalRefinementOptions options) {
         double[] variance = h.variance().orElseThrow(() -> new AnalysisException(
                 "the residual search needs the FRF's variance, got none"));
-        double guardHz = ModeSelection.EDGE_GUARD * (highHz - lowHz);
+        return search(h, variance, lowHz, highHz, fit, options);
+    }
+
+    /**
+     * Searches the residual of a refined fit and adds the modes it shows.
+     *
+     * @param h the measured receptance
+     * @param variance the noise variance of each line of h, positive
+     * @param lowHz lower edge of the fitted band, Hz
+     * @param highHz upper edge, Hz
+     * @param fit the refinement of the chosen poles
+     * @param options the refinement options used for it
+     * @return the final refinement and the poles added (none when the residual is noise)
+     */
+    static Outcome search(Frf h, double[] variance, double lowHz, double highHz, ModalRefinementResult fit,
+                          ModalRefinementOptions options) {
+        return search(h, variance, lowHz, highHz, fit, options, ModeSelection.EDGE_GUARD);
+    }
+
+    /**
+     * Searches the residual of a refined fit, away from the band's edges, and adds the modes it shows.
+     *
+     * @param h the measured receptance
+     * @param variance the noise variance of each line of h, positive
+     * @param lowHz lower edge of the fitted band, Hz
+     * @param highHz upper edge, Hz
+     * @param fit the refinement of the chosen poles
+     * @param options the refinement options used for it
+     * @param margin the fraction of the band's width at each edge whose windows are not searched
+     * @return the final refinement and the poles added (none when the residual is noise)
+     */
+    static Outcome search(Frf h, double[] variance, double lowHz, double highHz, ModalRefinementResult fit,
+                          ModalRefinementOptions options, double margin) {
+        double guardHz = margin * (highHz - lowHz);
         ModalRefinementResult current = fit;
         List<Pole> added = new ArrayList<>();
         while (added.size() < MAX_ADDED) {
             ModalRefinementResult next = null;
             for (List<List<Pole>> starts : candidates(h, variance, current, lowHz + guardHz, highHz - guardHz)) {
                 for (List<Pole> poles : starts) {
-                    next = withPoles(h, current, poles, options);
-                    if (next != null) {
+                    List<Pole> all = ModalCandidate.poles(current);
+                    all.addAll(poles);
+                    ModalRefinementResult candidate = ModalCandidate.refitWithNew(h, all, options, poles.size());
+                    if (ModalCandidate.better(h, variance, lowHz, highHz, current, candidate)) {
+                        next = candidate;
                         added.addAll(poles);
                         break;
                     }
@@ -100,35 +132,6 @@ final class ModalResidualSearch {
             current = next;
         }
         return new Outcome(current, List.copyOf(added));
-    }
-
-    /**
-     * The refinement with the poles added, or null when it fails, the cost does not fall by the
-     * threshold, or any mode of the new model is narrower than the data resolve (see
-     * {@link ModalEstimator#isResolved}): a "mode" a few millihertz wide is how a fit absorbs one
-     * disturbed line, not a resonance.
-     */
-    private static ModalRefinementResult withPoles(Frf h, ModalRefinementResult current, List<Pole> extra,
-                                                   ModalRefinementOptions options) {
-        List<Pole> poles = new ArrayList<>();
-        for (FittedMode m : current.modes()) {
-            poles.add(Pole.of(m.mode().frequencyHz(), Math.min(m.mode().dampingRatio(), 0.99)));
-        }
-        poles.addAll(extra);
-        ModalRefinementResult next;
-        try {
-            LsfdResult start = Lsfd.fit(h, poles, options.lines());
-            next = ModalRefinement.refine(h, start.modes(), start.residualTerms(),
-                    options.withMaxIterations(Math.min(options.maxIterations(), CANDIDATE_ITERATIONS)));
-        } catch (AnalysisException e) {
-            return null;
-        }
-        for (FittedMode m : next.modes()) {
-            if (!ModalEstimator.isResolved(h, m.mode())) {
-                return null;
-            }
-        }
-        return current.cost() - next.cost() > THRESHOLD ? next : null;
     }
 
     /** |e_k|^2 of the whitened residual at each line, the residual itself stored in {@code residual}. */
@@ -169,7 +172,7 @@ final class ModalResidualSearch {
                 sum -= e2[k - WINDOW];
             }
             int start = k - WINDOW + 1;
-            if (start >= 0 && f[start] >= fromHz && f[k] <= toHz) {
+            if (start >= 0 && f[start] >= fromHz && f[k] <= toHz && material(h, residual, start)) {
                 windowSum[start] = sum;
             }
         }
@@ -235,6 +238,17 @@ final class ModalResidualSearch {
         }
         Pole p = ModalResidualStart.at(f, residual, best);
         return p == null || Math.abs(p.frequencyHz() - centreHz) <= clearHz ? null : p;
+    }
+
+    /** Whether the misfit over the window starting at a line is material ({@link ModalCandidate#MATERIAL} of |H| there). */
+    static boolean material(Frf h, Complex[] residual, int start) {
+        double misfit = 0;
+        double response = 0;
+        for (int k = start; k < start + WINDOW; k++) {
+            misfit += residual[k].norm() * residual[k].norm();
+            response += h.magnitude(k) * h.magnitude(k);
+        }
+        return misfit >= ModalCandidate.MATERIAL * ModalCandidate.MATERIAL * response;
     }
 
     private static double nearestDamping(List<FittedMode> modes, double frequencyHz) {

@@ -125,6 +125,11 @@ public final class PeakPicking {
             halfWidthHz = (f[peak + 1] - f[peak - 1]) / 2;
             centreHz = band.peakFrequencyHz();
         }
+        if (!(halfWidthHz > 0) || !(centreHz > 0)) {
+            // A half-power point interpolated past the peak (a flank of a larger peak): the lines' own spacing.
+            halfWidthHz = (f[peak + 1] - f[peak - 1]) / 2;
+            centreHz = f[peak];
+        }
         int first = peak;
         while (first - 1 >= lowValley && (peak - first < 2 || f[first - 1] >= centreHz - 2 * halfWidthHz)) {
             first--;

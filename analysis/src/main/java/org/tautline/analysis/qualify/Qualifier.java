@@ -111,6 +111,7 @@ public final class Qualifier {
                 DOUBLET_SPLIT);
         HarmonicAssignment harmonics = numbering.harmonics();
         List<String> cautions = new ArrayList<>(request.recordCautions());
+        modal.unexplained().ifPresent(cautions::add);
         numbering.refusal().ifPresent(cautions::add);
         List<QualifiedMode> modes = new ArrayList<>();
         for (int i = 0; i < fitted.size(); i++) {

@@ -134,6 +134,28 @@ class QualifierTest {
     }
 
     @Test
+    void aFitThatCannotExplainTheDataMakesTheVerdictNotDeterminableWithItsReason() {
+        // Three adjacent lines between the first two harmonics pushed 30 % off: no mode fits them, so the fit says so
+        // and its reason leads the verdict; the undisturbed FRF raised no caution (aLevelCheck... above PASS).
+        double[] re = frf.realParts();
+        double[] im = frf.imaginaryParts();
+        int at = 250;
+        for (int k = at; k < at + 3; k++) {
+            re[k] *= 1.3;
+            im[k] *= 1.3;
+        }
+        Frf disturbed = Frf.of(frf.frequenciesHz(), re, im, FrfQuantity.RECEPTANCE);
+        Assessment a = Qualifier.withLevelCheck(Qualifier.qualify(QualificationRequest.of(STATED, disturbed,
+                Optional.of(LIMITS))), levelCheck(2e-4), Optional.of(LIMITS));
+        String why = a.modal().unexplained().orElseThrow();
+        assertTrue(why.startsWith("the fitted modes do not explain the measured response near "), why);
+        assertEquals(List.of(why), a.cautions());
+        assertEquals(Outcome.NOT_DETERMINABLE, a.verdict().orElseThrow().outcome());
+        assertEquals("not determinable: " + why, a.verdict().get().reasons().get(0));
+        assertEquals(List.of(), plain.cautions(), "the undisturbed FRF is explained");
+    }
+
+    @Test
     void aRequestIsFixedWhenMadeAndRefusesBlankCautions() {
         List<String> cautions = new ArrayList<>(List.of("one"));
         QualificationRequest r = new QualificationRequest(STATED, frf, QualificationRequest.of(STATED, frf,

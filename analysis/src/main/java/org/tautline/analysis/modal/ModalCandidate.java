@@ -1,0 +1,203 @@
+package org.tautline.analysis.modal;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.tautline.analysis.AnalysisException;
+import org.tautline.analysis.frf.Frf;
+
+/**
+ * A candidate model tried while a fit checks itself (a mode added where the residual shows one, a pole split in two,
+ * a pole outside the band for the modes beyond it), and the test that keeps it.
+ *
+ * <p>A candidate is kept when its cost, the sum of squared residuals over the band in units of the variance the fit
+ * is judged against ({@link NoiseFloor#judged}), falls by more than {@value #THRESHOLD} times the larger of 1 and the
+ * candidate's robust residual variance per line ({@link #scale}). With the noise variance right, twice the fall is
+ * chi-square with as many degrees of freedom as the candidate adds (3 or 4 for a mode), the likelihood-ratio test (S. S. Wilks, Ann. Math. Statist. 9:60-62, 1938); a fall of 30
+ * has odds below 1e-11 of coming from noise. When the model leaves more than noise (the residual variance above 1),
+ * the fall is measured against that residual variance instead, as the extra-sum-of-squares F-test does
+ * (G. A. F. Seber and C. J. Wild, Nonlinear Regression, Wiley 1989, sec. 5.9; both from memory), so a candidate must
+ * explain a misfit that stands out of the misfit left elsewhere.
+ */
+final class ModalCandidate {
+    /** Fall of the cost, in noise variances, that keeps a candidate. */
+    static final double THRESHOLD = 30;
+    /**
+     * Refinement iterations allowed a candidate model: one that needs more rarely lowers the cost enough to be
+     * kept, and its failures dominated the worst-case time.
+     */
+    static final int ITERATIONS = 50;
+    /**
+     * Standard errors by which a new mode's modal constant must stand clear of zero: a pole whose strength the data
+     * cannot tell from nothing is not a mode they show.
+     */
+    static final double SIGNIFICANT = 3;
+    /**
+     * Smallest misfit, relative to the response, that the search for missing modes acts on, and smallest peak, relative
+     * to the response there, of a mode it adds: a little below the level at which {@link FitCheck} calls the data
+     * unexplained, so that the search has tried what the check would report.
+     */
+    static final double MATERIAL = 0.02;
+
+    private ModalCandidate() {
+    }
+
+    /**
+     * The poles of a refined model, damping kept below 1 so a pole stays oscillating.
+     *
+     * @param fit the refined model
+     * @return its poles, in its order
+     */
+    static List<Pole> poles(ModalRefinementResult fit) {
+        List<Pole> poles = new ArrayList<>();
+        for (FittedMode m : fit.modes()) {
+            poles.add(Pole.of(m.mode().frequencyHz(), Math.min(m.mode().dampingRatio(), 0.99)));
+        }
+        return poles;
+    }
+
+    /**
+     * LSFD on the poles, then the joint refinement with at most {@value #ITERATIONS} iterations.
+     *
+     * @param h the measured receptance
+     * @param poles the candidate's poles
+     * @param options the refinement options of the fit
+     * @return the refined candidate, or null when it fails or leaves a mode narrower than the lines resolve (see
+     *     {@link ModalEstimator#isResolved}): a "mode" a few millihertz wide is how a fit absorbs one disturbed
+     *     line, not a resonance
+     */
+    static ModalRefinementResult refit(Frf h, List<Pole> poles, ModalRefinementOptions options) {
+        return refit(h, poles, options, ITERATIONS, 0);
+    }
+
+    /**
+     * LSFD on the poles with the last of them new, then the joint refinement.
+     *
+     * @param h the measured receptance
+     * @param poles the candidate's poles, the new ones last
+     * @param options the refinement options of the fit
+     * @param added how many of the poles, at the end of the list, are new
+     * @return the refined candidate, or null as for {@link #refit(Frf, List, ModalRefinementOptions)} and also when a
+     *     new mode leaves the band, its modal constant is within {@value #SIGNIFICANT} standard errors of zero, or it
+     *     moved more than a half-power bandwidth 2 zeta f from where it started (it then explains something other than
+     *     the residual that called for it)
+     */
+    static ModalRefinementResult refitWithNew(Frf h, List<Pole> poles, ModalRefinementOptions options, int added) {
+        return refit(h, poles, options, ITERATIONS, added);
+    }
+
+    /**
+     * LSFD on the poles, then the joint refinement with at most the given iterations.
+     *
+     * @param h the measured receptance
+     * @param poles the candidate's poles
+     * @param options the refinement options of the fit
+     * @param iterations most refinement iterations
+     * @return the refined candidate, or null as for {@link #refit(Frf, List, ModalRefinementOptions)}
+     */
+    static ModalRefinementResult refit(Frf h, List<Pole> poles, ModalRefinementOptions options, int iterations) {
+        return refit(h, poles, options, iterations, 0);
+    }
+
+    private static ModalRefinementResult refit(Frf h, List<Pole> poles, ModalRefinementOptions options, int iterations,
+                                               int added) {
+        ModalRefinementResult next;
+        try {
+            LsfdResult start = Lsfd.fit(h, poles, options.lines());
+            next = ModalRefinement.refine(h, start.modes(), start.residualTerms(),
+                    options.withMaxIterations(Math.min(options.maxIterations(), iterations)));
+        } catch (AnalysisException e) {
+            return null;
+        }
+        double lowHz = options.lines().fromHz();
+        double highHz = options.lines().toHz();
+        for (FittedMode m : next.modes()) {
+            double f = m.mode().frequencyHz();
+            if (!ModalEstimator.isResolved(h, m.mode()) || f >= lowHz && f <= highHz && !material(h, m.mode())) {
+                return null;
+            }
+        }
+        List<FittedMode> modes = next.modes();
+        for (int r = modes.size() - added; r < modes.size(); r++) {
+            FittedMode m = modes.get(r);
+            double f = m.mode().frequencyHz();
+            double std = m.modalConstantStd().norm();
+            Pole start = poles.get(r);
+            double reachHz = 2 * Math.max(start.dampingRatio(), m.mode().dampingRatio()) * Math.max(f, start.frequencyHz());
+            if (f < lowHz || f > highHz || !(m.mode().modalConstant().norm() >= SIGNIFICANT * std)
+                    || Math.abs(f - start.frequencyHz()) > reachHz) {
+                return null;
+            }
+        }
+        return next;
+    }
+
+    /**
+     * Whether a mode's own peak, |A|/(2 zeta w_n^2), is at least {@link #MATERIAL} of the measured response at
+     * the line nearest its frequency: a "mode" weaker than that beside the response is how a fit bends itself round a
+     * small systematic misfit (two such poles with opposite modal constants are the usual sign), not a resonance
+     * anyone could attribute.
+     */
+    static boolean material(Frf h, Mode mode) {
+        double w = mode.angularFrequencyRadPerS();
+        double peak = mode.modalConstant().norm() / (2 * mode.dampingRatio() * w * w);
+        int nearest = 0;
+        for (int k = 1; k < h.size(); k++) {
+            if (Math.abs(h.frequencyHz(k) - mode.frequencyHz()) < Math.abs(h.frequencyHz(nearest) - mode.frequencyHz())) {
+                nearest = k;
+            }
+        }
+        return peak >= MATERIAL * h.magnitude(nearest);
+    }
+
+    /**
+     * Whether a candidate lowers the cost enough to be kept.
+     *
+     * @param h the measured receptance
+     * @param noise the noise variance of each line
+     * @param lowHz lower edge of the fitted band, Hz
+     * @param highHz upper edge, Hz
+     * @param current the model now
+     * @param candidate the candidate, or null
+     * @return true when the candidate is kept
+     */
+    static boolean better(Frf h, double[] noise, double lowHz, double highHz, ModalRefinementResult current,
+                          ModalRefinementResult candidate) {
+        return candidate != null && cost(h, noise, lowHz, highHz, current) - cost(h, noise, lowHz, highHz, candidate)
+                > THRESHOLD * Math.max(1, scale(h, noise, lowHz, highHz, candidate));
+    }
+
+    /** sum |e_k|^2 over the band's lines, whitened by the given variance. */
+    private static double cost(Frf h, double[] noise, double lowHz, double highHz, ModalRefinementResult fit) {
+        double[] e2 = FitResidual.of(h, noise, fit.modes().stream().map(FittedMode::mode).toList(), fit.residualTerms())
+                .whitenedSquares();
+        double sum = 0;
+        for (int k = 0; k < e2.length; k++) {
+            if (h.frequencyHz(k) >= lowHz && h.frequencyHz(k) <= highHz) {
+                sum += e2[k];
+            }
+        }
+        return sum;
+    }
+
+    /**
+     * A robust residual variance of a model, in noise variances: the median of |e_k|^2 over the fitted lines divided by
+     * ln 2, its value for circular Gaussian noise of unit variance. Unlike the mean it is not raised by a few lines far
+     * off the model (those that robust weights hold down), only by a misfit spread over most lines.
+     *
+     * @param h the measured receptance
+     * @param noise the noise variance of each line
+     * @param lowHz lower edge of the fitted band, Hz
+     * @param highHz upper edge, Hz
+     * @param fit the model
+     * @return the variance, 1 for a model that explains the data
+     */
+    static double scale(Frf h, double[] noise, double lowHz, double highHz, ModalRefinementResult fit) {
+        double[] e2 = FitResidual.of(h, noise, fit.modes().stream().map(FittedMode::mode).toList(), fit.residualTerms())
+                .whitenedSquares();
+        double[] inBand = java.util.stream.IntStream.range(0, e2.length)
+                .filter(k -> h.frequencyHz(k) >= lowHz && h.frequencyHz(k) <= highHz).mapToDouble(k -> e2[k]).sorted()
+                .toArray();
+        return inBand.length == 0 ? 1 : inBand[inBand.length / 2] / Math.log(2);
+    }
+}
