@@ -216,6 +216,7 @@ public final class ModalEstimator {
             }
             poles = selection.poles();
         }
+        List<Pole> added = new ArrayList<>();
         List<FittedMode> modes;
         List<Mode> model;
         ResidualTerms residuals;
@@ -234,8 +235,7 @@ public final class ModalEstimator {
             ModalRefinementResult refined = searched.refined().refined();
             for (Pole p : searched.added()) {
                 selection = selection.withFoundInResidual(p);
-                warnings.add(String.format(Locale.ROOT, "a mode near %.4g Hz was missed by the stabilisation chart and"
-                        + " added because the fit left a residual far above the noise there", p.frequencyHz()));
+                added.add(p);
             }
             for (double f : searched.splitHz()) {
                 warnings.add(String.format(Locale.ROOT, "the mode near %.4g Hz was fitted as two close modes because one"
@@ -278,6 +278,15 @@ public final class ModalEstimator {
         }
         residuals = residuals.withOutsideBand(outsideBand);
         kept.sort(java.util.Comparator.comparingDouble(m -> m.mode().frequencyHz()));
+        for (Pole p : added) {
+            // Said only of a mode that is among the fitted modes at the end (within a half-power bandwidth).
+            boolean kept1 = kept.stream().anyMatch(m -> Math.abs(m.mode().frequencyHz() - p.frequencyHz())
+                    <= 2 * Math.max(m.mode().dampingRatio(), p.dampingRatio()) * p.frequencyHz());
+            if (kept1) {
+                warnings.add(String.format(Locale.ROOT, "a mode near %.4g Hz was missed by the stabilisation chart and"
+                        + " added because the fit left a residual far above the noise there", p.frequencyHz()));
+            }
+        }
         List<Mode> plain = kept.stream().map(FittedMode::mode).toList();
         Optional<FitQuality> quality = plain.isEmpty() ? Optional.empty()
                 : Optional.of(FitQuality.of(bandOf(h, low, high), plain, residuals, 3.0));
