@@ -250,8 +250,8 @@ public final class ModalEstimator {
             residuals = refined.residualTerms();
             residualsStd = refined.residualTermsStd();
         } catch (AnalysisException e) {
-            warnings.add("the joint refinement failed (" + e.getMessage() + "); the modes are the LSCF/LSFD estimates"
-                    + " and carry no standard errors");
+            warnings.add("the joint refinement failed (" + e.getMessage() + "); the modes are the estimates of the pole search"
+                    + " and the modal-constant fit, and carry no standard errors");
             LsfdResult start = Lsfd.fit(h, poles, base);
             modes = withoutErrors(start.modes());
             model = start.modes();
