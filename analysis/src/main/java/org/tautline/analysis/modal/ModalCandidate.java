@@ -32,6 +32,8 @@ final class ModalCandidate {
      * cannot tell from nothing is not a mode they show.
      */
     static final double SIGNIFICANT = 3;
+    /** Line spacings within which a windowed estimate cannot show two modes (a Hann window's main lobe). */
+    static final double WINDOW_LINES = 2;
     /**
      * Smallest misfit, relative to the response, that the search for missing modes acts on, and smallest peak, relative
      * to the response there, of a mode it adds: a little below the level at which {@link FitCheck} calls the data
@@ -80,7 +82,8 @@ final class ModalCandidate {
      * @return the refined candidate, or null as for {@link #refit(Frf, List, ModalRefinementOptions)} and also when a
      *     new mode leaves the band, its modal constant is within {@value #SIGNIFICANT} standard errors of zero, or it
      *     moved more than a half-power bandwidth 2 zeta f from where it started (it then explains something other than
-     *     the residual that called for it)
+     *     the residual that called for it), or, for an FRF from windowed spectra, it lies within
+     *     {@value #WINDOW_LINES} line spacings of another mode, or its half-power band reaches the band's edge guard
      */
     static ModalRefinementResult refitWithNew(Frf h, List<Pole> poles, ModalRefinementOptions options, int added) {
         return refit(h, poles, options, ITERATIONS, added);
@@ -109,8 +112,8 @@ final class ModalCandidate {
         } catch (AnalysisException e) {
             return null;
         }
-        double lowHz = options.lines().fromHz();
-        double highHz = options.lines().toHz();
+        double lowHz = Math.max(options.lines().fromHz(), h.frequencyHz(0));
+        double highHz = Math.min(options.lines().toHz(), h.frequencyHz(h.size() - 1));
         for (FittedMode m : next.modes()) {
             double f = m.mode().frequencyHz();
             if (!ModalEstimator.isResolved(h, m.mode()) || f >= lowHz && f <= highHz && !material(h, m.mode())) {
@@ -125,11 +128,50 @@ final class ModalCandidate {
             Pole start = poles.get(r);
             double reachHz = 2 * Math.max(start.dampingRatio(), m.mode().dampingRatio()) * Math.max(f, start.frequencyHz());
             if (f < lowHz || f > highHz || !(m.mode().modalConstant().norm() >= SIGNIFICANT * std)
-                    || Math.abs(f - start.frequencyHz()) > reachHz) {
+                    || Math.abs(f - start.frequencyHz()) > reachHz || tooCloseForAWindow(h, modes, r)
+                    || !withinGuard(m.mode(), lowHz, highHz)) {
                 return null;
             }
         }
         return next;
+    }
+
+    /**
+     * Whether a mode's half-power band f (1 -+ zeta) lies inside the band less {@link ModeSelection#EDGE_GUARD} of its
+     * width at each edge, the rule the chart's poles are chosen by: a broad pole reaching past an edge stands for the
+     * modes beyond it.
+     */
+    private static boolean withinGuard(Mode mode, double lowHz, double highHz) {
+        double guard = ModeSelection.EDGE_GUARD * (highHz - lowHz);
+        double f = mode.frequencyHz();
+        return f * (1 - mode.dampingRatio()) >= lowHz + guard && f * (1 + mode.dampingRatio()) <= highHz - guard;
+    }
+
+    /**
+     * Whether a new mode of an FRF estimated from windowed spectra (one that carries a coherence) stands within
+     * {@value #WINDOW_LINES} line spacings of another mode. Such an estimate is the true FRF smoothed over its window's
+     * main lobe, two lines either side of a line for a Hann window (F. J. Harris, Proc. IEEE 66:51-83, 1978, from
+     * memory), so a peak a couple of lines wide comes out broadened, and two poles a line apart fit it better than one:
+     * a doublet the lines cannot show.
+     */
+    private static boolean tooCloseForAWindow(Frf h, List<FittedMode> modes, int index) {
+        if (h.coherence().isEmpty()) {
+            return false;
+        }
+        double f = modes.get(index).mode().frequencyHz();
+        int nearest = 1;
+        for (int k = 1; k < h.size(); k++) {
+            if (Math.abs(h.frequencyHz(k) - f) < Math.abs(h.frequencyHz(nearest) - f)) {
+                nearest = k;
+            }
+        }
+        double spacing = h.frequencyHz(nearest) - h.frequencyHz(nearest - 1);
+        for (int r = 0; r < modes.size(); r++) {
+            if (r != index && Math.abs(modes.get(r).mode().frequencyHz() - f) < WINDOW_LINES * spacing) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /**
