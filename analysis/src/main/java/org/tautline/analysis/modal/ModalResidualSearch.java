@@ -137,17 +137,14 @@ final class ModalResidualSearch {
     /** |e_k|^2 of the whitened residual at each line, the residual itself stored in {@code residual}. */
     private static double[] whitenedSquares(Frf h, double[] variance, List<Mode> modes, ResidualTerms terms,
                                             Complex[] residual) {
-        int n = h.size();
-        double[] e2 = new double[n];
-        for (int k = 0; k < n; k++) {
-            double f = h.frequencyHz(k);
-            Complex model = terms.receptanceAt(f);
-            for (Mode m : modes) {
-                model = model.add(m.receptanceAt(f));
+        FitResidual fit = FitResidual.of(h, variance, modes, terms);
+        Complex[] r = fit.residual();
+        System.arraycopy(r, 0, residual, 0, r.length);
+        double[] e2 = fit.whitenedSquares();
+        for (int k = 0; k < e2.length; k++) {
+            if (!(variance[k] > 0)) {
+                e2[k] = 0; // a line without a noise variance carries no weight
             }
-            residual[k] = h.value(k).subtract(model);
-            double norm = residual[k].norm();
-            e2[k] = variance[k] > 0 ? norm * norm / variance[k] : 0;
         }
         return e2;
     }
