@@ -83,31 +83,6 @@ final class LsfdLeastSquares {
         return new LsfdLeastSquares(x, inverse, condition, residual);
     }
 
-    /**
-     * Reduces min ||A x - b|| to the equivalent p x p problem min ||R x - c||, R upper triangular.
-     *
-     * <p>||A x - b||^2 = ||R x - c||^2 + (the part of b outside the range of A), so any problem that adds rows to
-     * A (a damping term, say) can be solved on R and c alone.
-     *
-     * @param columns p columns of length m (m at least p), overwritten
-     * @param rhs the m right-hand side values (not changed)
-     * @return p + 1 columns of length p: the columns of R, then c
-     */
-    static double[][] reduce(double[][] columns, double[] rhs) {
-        int p = columns.length;
-        double[] scale = new double[p];
-        double[] b = rhs.clone();
-        double[][] r = triangularise(columns, b, scale);
-        double[][] out = new double[p + 1][p];
-        for (int j = 0; j < p; j++) {
-            for (int i = 0; i <= j; i++) {
-                out[j][i] = r[i][j] * scale[j];
-            }
-        }
-        System.arraycopy(b, 0, out[p], 0, p);
-        return out;
-    }
-
     /** Householder QR of the column-scaled A in place: fills scale, applies Q^T to b, returns R by rows. */
     private static double[][] triangularise(double[][] columns, double[] b, double[] scale) {
         int p = columns.length;
@@ -127,10 +102,8 @@ final class LsfdLeastSquares {
                 alpha = -alpha;
             }
             double vk = v[k] - alpha;
-            double vnorm2 = vk * vk;
-            for (int i = k + 1; i < m; i++) {
-                vnorm2 += v[i] * v[i];
-            }
+            // ||v||^2 after v_k is replaced: alpha^2 - v_k^2 + (v_k - alpha)^2 = 2 alpha (alpha - v_k).
+            double vnorm2 = 2 * alpha * (alpha - v[k]);
             v[k] = vk;
             if (vnorm2 > 0) {
                 for (int j = k + 1; j < p; j++) {
@@ -147,17 +120,37 @@ final class LsfdLeastSquares {
     }
 
     private static void reflect(double[] v, double[] target, int k, double vnorm2) {
-        double dot = 0;
-        for (int i = k; i < v.length; i++) {
-            dot += v[i] * target[i];
-        }
-        double f = 2 * dot / vnorm2;
+        double f = 2 * dot(v, target, k) / vnorm2;
         for (int i = k; i < v.length; i++) {
             target[i] -= f * v[i];
         }
     }
 
+    /** sum v_i t_i from i = from, in four partial sums (independent additions the processor can overlap). */
+    private static double dot(double[] v, double[] t, int from) {
+        double s0 = 0;
+        double s1 = 0;
+        double s2 = 0;
+        double s3 = 0;
+        int i = from;
+        for (; i + 3 < v.length; i += 4) {
+            s0 += v[i] * t[i];
+            s1 += v[i + 1] * t[i + 1];
+            s2 += v[i + 2] * t[i + 2];
+            s3 += v[i + 3] * t[i + 3];
+        }
+        for (; i < v.length; i++) {
+            s0 += v[i] * t[i];
+        }
+        return (s0 + s1) + (s2 + s3);
+    }
+
+    /** The 2-norm from an index on; rescaled only when the plain sum of squares over- or underflows. */
     private static double norm(double[] v, int from) {
+        double plain = dot(v, v, from);
+        if (plain > Double.MIN_NORMAL && plain < Double.MAX_VALUE) {
+            return Math.sqrt(plain);
+        }
         double big = 0;
         for (int i = from; i < v.length; i++) {
             big = Math.max(big, Math.abs(v[i]));

@@ -162,6 +162,107 @@ final class ModalRefinementModel {
     }
 
     /**
+     * The unscaled normal equations J^T J and J^T (target - values) of the whitened model, accumulated line by line
+     * without storing J (the same entries as {@link #jacobianColumns}, in plain arithmetic), filling the model values.
+     *
+     * @param p scaled parameters
+     * @param target the whitened stacked measurements, 2m values
+     * @param values receives the 2m whitened model values
+     * @param matrix receives J^T J, p x p, zeroed by the caller (upper triangle and diagonal filled)
+     * @param gradient receives J^T (target - values), p values, zeroed by the caller
+     */
+    void normalEquations(double[] p, double[] target, double[] values, double[][] matrix, double[] gradient) {
+        int count = p.length;
+        int n = w0.length;
+        double[] re = new double[count];
+        double[] im = new double[count];
+        for (int k = 0; k < w.length; k++) {
+            double wk = w[k];
+            double sq = root[k];
+            double sumRe = 0;
+            double sumIm = 0;
+            int c = 0;
+            for (int r = 0; r < n; r++) {
+                double wn = w0[r] * p[c];
+                double zeta = zeta0[r] * Math.exp(p[c + 1]);
+                double ar = aScale[r] * p[c + 2];
+                double ai = realModes ? 0 : aScale[r] * p[c + 3];
+                double dr = wn * wn - wk * wk;
+                double di = 2 * zeta * wn * wk;
+                double d2 = dr * dr + di * di;
+                double invRe = dr / d2;
+                double invIm = -di / d2;
+                double tRe = ar * invRe - ai * invIm;
+                double tIm = ar * invIm + ai * invRe;
+                sumRe += tRe;
+                sumIm += tIm;
+                double cRe = -(tRe * invRe - tIm * invIm);
+                double cIm = -(tRe * invIm + tIm * invRe);
+                double u = 2 * wn;
+                double v = 2 * zeta * wk;
+                re[c] = sq * w0[r] * (cRe * u - cIm * v);
+                im[c] = sq * w0[r] * (cRe * v + cIm * u);
+                double s = 2 * wn * wk * zeta;
+                re[c + 1] = -sq * cIm * s;
+                im[c + 1] = sq * cRe * s;
+                re[c + 2] = sq * aScale[r] * invRe;
+                im[c + 2] = sq * aScale[r] * invIm;
+                c += 3;
+                if (!realModes) {
+                    re[c] = -sq * aScale[r] * invIm;
+                    im[c] = sq * aScale[r] * invRe;
+                    c++;
+                }
+            }
+            if (upper) {
+                sumRe += upperScale * p[c];
+                sumIm += upperScale * p[c + 1];
+                re[c] = sq * upperScale;
+                im[c++] = 0;
+                re[c] = 0;
+                im[c++] = sq * upperScale;
+            }
+            if (lower) {
+                double g = -lowerScale / (wk * wk);
+                sumRe += g * p[c];
+                sumIm += g * p[c + 1];
+                re[c] = sq * g;
+                im[c++] = 0;
+                re[c] = 0;
+                im[c++] = sq * g;
+            }
+            for (int q = 0; q < outside.size(); q++) {
+                Mode o = outside.get(q);
+                double wq = o.angularFrequencyRadPerS();
+                double dr = wq * wq - wk * wk;
+                double di = 2 * o.dampingRatio() * wq * wk;
+                double d2 = dr * dr + di * di;
+                double bRe = outsideScale[q] * dr / d2;
+                double bIm = -outsideScale[q] * di / d2;
+                sumRe += bRe * p[c] - bIm * p[c + 1];
+                sumIm += bRe * p[c + 1] + bIm * p[c];
+                re[c] = sq * bRe;
+                im[c++] = sq * bIm;
+                re[c] = -sq * bIm;
+                im[c++] = sq * bRe;
+            }
+            values[2 * k] = sq * sumRe;
+            values[2 * k + 1] = sq * sumIm;
+            double eRe = target[2 * k] - values[2 * k];
+            double eIm = target[2 * k + 1] - values[2 * k + 1];
+            for (int j = 0; j < count; j++) {
+                double xr = re[j];
+                double xi = im[j];
+                gradient[j] += xr * eRe + xi * eIm;
+                double[] row = matrix[j];
+                for (int l = j; l < count; l++) {
+                    row[l] += xr * re[l] + xi * im[l];
+                }
+            }
+        }
+    }
+
+    /**
      * The whitened stacked model values alone, without the Jacobian.
      *
      * @param p scaled parameters

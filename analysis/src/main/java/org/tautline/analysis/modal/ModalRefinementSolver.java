@@ -1,17 +1,28 @@
 package org.tautline.analysis.modal;
 
+import org.hipparchus.exception.MathIllegalArgumentException;
+import org.hipparchus.linear.Array2DRowRealMatrix;
+import org.hipparchus.linear.ArrayRealVector;
+import org.hipparchus.linear.CholeskyDecomposition;
+import org.hipparchus.linear.DecompositionSolver;
+
 /**
- * A Levenberg-Marquardt minimiser of the whitened modal residual, each step solved by QR of the damped system.
+ * A Levenberg-Marquardt minimiser of the whitened modal residual, each step solved from the column-scaled normal
+ * equations.
  *
  * <p>Each step minimises ||J d - r||^2 + lambda sum_j ||J_j||^2 d_j^2, Marquardt's damping scaled by the column
  * norms of J (D. W. Marquardt, "An algorithm for least-squares estimation of nonlinear parameters", SIAM J. Appl.
- * Math. 11:431-441, 1963, from memory). J and r are reduced once per iteration by Householder QR to the p x p
- * triangle R and Q^T r ({@link LsfdLeastSquares#reduce}); each trial lambda then solves only the 2p x p system of R
- * stacked on the damping rows. No normal equations are formed, so close modes keep their accuracy. lambda falls tenfold after a step that lowers the cost and rises tenfold after one that does
- * not. The minimiser stops when an accepted step lowers the cost by less than {@link #RELATIVE_COST} of it or
- * moves no scaled parameter by more than {@link #STEP}. The model works on columns throughout, which keeps the
- * 8000 x 34 Jacobian of a 10-mode fit of 4000 lines in cache-friendly arrays; this replaced a general-purpose
- * optimiser whose row-wise QR took two thirds of a whole modal fit.
+ * Math. 11:431-441, 1963, from memory): with D the column norms and A = D^-1 J^T J D^-1 (unit diagonal), the step is
+ * d = D^-1 y with (A + lambda I) y = D^-1 J^T r, solved by Cholesky (Hipparchus). A and the gradient are formed once
+ * per iteration, row by row of J, which the compiler can vectorise; each trial lambda then solves only a p x p system.
+ * The gradient J^T r is exact, so the point the iteration stops at is the least-squares one whatever the rounding of A:
+ * squaring the condition number of J costs at most some accepted steps, and a step that rounding spoils raises the cost,
+ * is refused and raises lambda. The standard errors at the solution are computed apart, from a Householder QR of J
+ * ({@link ModalRefinement}), where the accuracy matters. lambda falls tenfold after a step that lowers the cost and
+ * rises tenfold after one that does not. The minimiser stops when an accepted step lowers the cost by less than
+ * {@link #RELATIVE_COST} of it or moves no scaled parameter by more than {@link #STEP}. A QR of the 8000 x 80 Jacobian
+ * of a 24-mode fit of 4000 lines at every iteration took four fifths of such a fit; the normal equations take a
+ * fraction of that.
  */
 final class ModalRefinementSolver {
     /** Relative cost decrease below which an accepted step ends the iteration. */
@@ -20,6 +31,8 @@ final class ModalRefinementSolver {
     static final double STEP = 1e-10;
     private static final double START_DAMPING = 1e-3;
     private static final double MAX_DAMPING = 1e16;
+    /** Smallest Cholesky pivot of the unit-diagonal damped matrix accepted: below it the step is taken as singular. */
+    private static final double SMALLEST_PIVOT = 1e-14;
 
     /**
      * Where the minimiser stopped.
@@ -48,32 +61,21 @@ final class ModalRefinementSolver {
         int rows = target.length;
         double[] point = model.start();
         double[] values = new double[rows];
-        double[][] columns = model.jacobianColumns(point, values);
+        Normal normal = Normal.of(model, point, target, values);
         double cost = cost(target, values);
         double lambda = START_DAMPING;
         int iterations = 1;
-        double[][] reduced = reduced(columns, target, values);
         while (true) {
-            double[][] damped = new double[p][2 * p];
-            for (int j = 0; j < p; j++) {
-                System.arraycopy(reduced[j], 0, damped[j], 0, p);
-                double norm = 0;
-                for (int i = 0; i < p; i++) {
-                    norm += reduced[j][i] * reduced[j][i];
-                }
-                damped[j][p + j] = Math.sqrt(lambda * norm);
-            }
-            double[] residual = new double[2 * p];
-            System.arraycopy(reduced[p], 0, residual, 0, p);
-            LsfdLeastSquares step = LsfdLeastSquares.solve(damped, residual);
-            double[] d = step.solution();
+            double[] d = normal.step(lambda);
             double largest = 0;
             double[] trial = point.clone();
-            for (int j = 0; j < p; j++) {
-                trial[j] += d[j];
-                largest = Math.max(largest, Math.abs(d[j]));
+            if (d != null) {
+                for (int j = 0; j < p; j++) {
+                    trial[j] += d[j];
+                    largest = Math.max(largest, Math.abs(d[j]));
+                }
             }
-            if (!step.fullRank() || !Double.isFinite(largest)) {
+            if (d == null || !Double.isFinite(largest)) {
                 lambda *= 10;
             } else {
                 double[] trialValues = new double[rows];
@@ -90,7 +92,7 @@ final class ModalRefinementSolver {
                     if (iterations >= maxIterations) {
                         return new Outcome(point, cost, iterations, false);
                     }
-                    reduced = reduced(model.jacobianColumns(point, values), target, values);
+                    normal = Normal.of(model, point, target, values);
                     iterations++;
                     continue;
                 }
@@ -105,13 +107,55 @@ final class ModalRefinementSolver {
         }
     }
 
-    /** R and Q^T r of the Jacobian and the residual r = target - values, see {@link LsfdLeastSquares#reduce}. */
-    private static double[][] reduced(double[][] columns, double[] target, double[] values) {
-        double[] residual = new double[target.length];
-        for (int i = 0; i < target.length; i++) {
-            residual[i] = target[i] - values[i];
+    /**
+     * The column-scaled normal equations of one iteration.
+     *
+     * @param matrix A = D^-1 J^T J D^-1, unit diagonal (upper triangle and diagonal filled, then mirrored)
+     * @param gradient D^-1 J^T r
+     * @param scale the column norms D (1 for a zero column)
+     */
+    private record Normal(double[][] matrix, double[] gradient, double[] scale) {
+        /** The equations at a point, filling the model's values there. */
+        static Normal of(ModalRefinementModel model, double[] point, double[] target, double[] values) {
+            int p = point.length;
+            double[][] a = new double[p][p];
+            double[] g = new double[p];
+            model.normalEquations(point, target, values, a, g);
+            double[] scale = new double[p];
+            for (int j = 0; j < p; j++) {
+                scale[j] = a[j][j] > 0 ? Math.sqrt(a[j][j]) : 1;
+            }
+            for (int j = 0; j < p; j++) {
+                g[j] /= scale[j];
+                for (int l = j; l < p; l++) {
+                    a[j][l] /= scale[j] * scale[l];
+                    a[l][j] = a[j][l];
+                }
+            }
+            return new Normal(a, g, scale);
         }
-        return LsfdLeastSquares.reduce(columns, residual);
+
+        /** The step for a damping, or null when the damped matrix is singular to working accuracy. */
+        double[] step(double lambda) {
+            int p = gradient.length;
+            double[][] damped = new double[p][];
+            for (int j = 0; j < p; j++) {
+                damped[j] = matrix[j].clone();
+                damped[j][j] += lambda * Math.max(matrix[j][j], Double.MIN_NORMAL);
+            }
+            DecompositionSolver solver;
+            try {
+                solver = new CholeskyDecomposition(new Array2DRowRealMatrix(damped, false),
+                        CholeskyDecomposition.DEFAULT_RELATIVE_SYMMETRY_THRESHOLD, SMALLEST_PIVOT).getSolver();
+            } catch (MathIllegalArgumentException e) {
+                return null;
+            }
+            double[] y = solver.solve(new ArrayRealVector(gradient, false)).toArray();
+            for (int j = 0; j < p; j++) {
+                y[j] /= scale[j];
+            }
+            return y;
+        }
     }
 
     private static double cost(double[] target, double[] values) {
