@@ -27,7 +27,8 @@ import org.tautline.analysis.frf.Frf;
  * <p>Two modes closer than about a half-power bandwidth (the two polarisations of a string) may come out of the
  * stabilisation chart as one pole between them. Where the residual within {@value #SPLIT_REACH} half-power
  * bandwidths of a mode stands above the detection level, the mode's pole is replaced by two poles, one half-power
- * bandwidth apart and then half of that, with the mode's damping, and the model refined; the pair is kept when both
+ * bandwidth apart and then half of that, with the mode's damping, and the model fitted again, first near the pair and
+ * then as a whole ({@link ModalCandidate#tryNew}); the pair is kept when both
  * poles stay resolved, inside the band and at least {@value #PAIR_LINES} line spacings apart, and the cost falls as
  * {@link ModalCandidate} asks, the test of one model
  * nested in another by a likelihood ratio. The detection level is that of {@link ModalResidualSearch}.
@@ -329,15 +330,19 @@ final class ModalRepair {
             Mode m = modes.get(chosen).mode();
             tried.set(chosen, true);
             ModalRefinementResult kept = null;
+            List<Integer> others = new ArrayList<>();
+            for (int r = 0; r < modes.size(); r++) {
+                if (r != chosen) {
+                    others.add(r);
+                }
+            }
+            int inside = insideCount(current, lowHz, highHz);
             for (double halfSplit : new double[] {m.dampingRatio(), 0.5 * m.dampingRatio()}) {
-                List<Pole> poles = ModalCandidate.poles(current);
-                poles.remove(chosen);
-                poles.add(Pole.of(m.frequencyHz() * (1 - halfSplit), m.dampingRatio()));
-                poles.add(Pole.of(m.frequencyHz() * (1 + halfSplit), m.dampingRatio()));
-                ModalRefinementResult candidate = ModalCandidate.refitWithNew(h, poles, options, 2);
-                if (candidate != null && resolvedPair(h, candidate)
-                        && insideCount(candidate, lowHz, highHz) == insideCount(current, lowHz, highHz) + 1
-                        && ModalCandidate.better(h, variance, lowHz, highHz, current, candidate)) {
+                List<Pole> pair = List.of(Pole.of(m.frequencyHz() * (1 - halfSplit), m.dampingRatio()),
+                        Pole.of(m.frequencyHz() * (1 + halfSplit), m.dampingRatio()));
+                ModalRefinementResult candidate = ModalCandidate.tryNew(h, variance, lowHz, highHz, current, others,
+                        pair, options, c -> resolvedPair(h, c) && insideCount(c, lowHz, highHz) == inside + 1);
+                if (candidate != null) {
                     kept = candidate;
                     break;
                 }

@@ -24,8 +24,9 @@ import org.tautline.analysis.frf.Frf;
  * half-power half-width zeta f keeps |e|^2 above THRESHOLD/WINDOW out to zeta f sqrt(P WINDOW/THRESHOLD - 1) from
  * its peak (and at least {@link ModalResidualStart#FIRST_LINES}/2 lines). One pole is put at the line of largest
  * residual in the first window with the damping ratio of the nearest fitted mode (close modes of one specimen damp
- * alike; a string's two polarisations nearly equally), and LSFD and the joint refinement are rerun with all poles.
- * The new model is kept when {@link ModalCandidate#better} says its cost fell far enough. If not,
+ * alike; a string's two polarisations nearly equally), and the model is fitted again with it, first near the new pole
+ * and then as a whole ({@link ModalCandidate#tryNew}). The new model is kept when {@link ModalCandidate#better} says
+ * its cost fell far enough. If not,
  * the pole of {@link ModalResidualStart} (a one-pole fit of the residual around that line) is tried from the same
  * window, then that pole together with the local pole of the strongest line within the window's reach but outside
  * two half-power half-widths of the first (a pair missing together, whose one added pole cannot settle while its
@@ -112,11 +113,11 @@ final class ModalResidualSearch {
         while (added.size() < MAX_ADDED) {
             ModalRefinementResult next = null;
             for (List<List<Pole>> starts : candidates(h, variance, current, lowHz + guardHz, highHz - guardHz)) {
+                List<Integer> kept = java.util.stream.IntStream.range(0, current.modes().size()).boxed().toList();
                 for (List<Pole> poles : starts) {
-                    List<Pole> all = ModalCandidate.poles(current);
-                    all.addAll(poles);
-                    ModalRefinementResult candidate = ModalCandidate.refitWithNew(h, all, options, poles.size());
-                    if (ModalCandidate.better(h, variance, lowHz, highHz, current, candidate)) {
+                    ModalRefinementResult candidate = ModalCandidate.tryNew(h, variance, lowHz, highHz, current, kept,
+                            poles, options, c -> true);
+                    if (candidate != null) {
                         next = candidate;
                         added.addAll(poles);
                         break;
