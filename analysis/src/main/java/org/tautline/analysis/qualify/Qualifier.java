@@ -56,6 +56,18 @@ public final class Qualifier {
     }
 
     /**
+     * Qualifies a modal fit made earlier and recorded (a run folder's result), without fitting the FRF again:
+     * numbering, tension, participation and verdict follow from its modes as in {@link #qualify}.
+     *
+     * @param request what to qualify; its FRF must be the one the fit was made from
+     * @param modal the recorded fit
+     * @return the assessment
+     */
+    public static Assessment ofFit(QualificationRequest request, ModalEstimate modal) {
+        return assess(request, request.frf().toQuantity(FrfQuantity.RECEPTANCE), modal);
+    }
+
+    /**
      * Fits again with a pole choice edited by hand, and redoes everything downstream.
      *
      * <p>The poles go through the same LSFD and joint refinement as an automatic fit ({@code ModalEstimator.refit});

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Optional;
 
 import org.tautline.analysis.frf.Frf;
+import org.tautline.analysis.modal.ModalEstimate;
 import org.tautline.analysis.modal.ModalEstimator;
 import org.tautline.analysis.modal.ModeSelection;
 import org.tautline.analysis.qualify.Assessment;
@@ -71,6 +72,37 @@ public final class Qualification {
                     + "), so its FRF lacks the steps not run");
         }
         return new QualificationResult(Qualifier.qualify(request), sweep, secondsSince(wallStartNs));
+    }
+
+    /**
+     * Qualifies a modal fit recorded with a run (its result file) without fitting the FRF again: the request is made as
+     * the run's was (its level check, or why it had none, and the record's cautions) and the recorded modes are
+     * numbered and judged ({@link Qualifier#ofFit}).
+     *
+     * @param specimen what was stated about the specimen
+     * @param frf the FRF the fit was made from
+     * @param modal the recorded fit
+     * @param specification the limits to judge against, if any
+     * @param levelCheck the recorded level check, if any
+     * @param whyNoLevelCheck why there is none, as recorded; empty for the plain "not measured"
+     * @param recordCautions what the record said against trusting the result
+     * @param wallTimeS the recorded wall time of the qualification, s
+     * @return the result
+     */
+    public static QualificationResult ofRecordedFit(Specimen specimen, Frf frf, ModalEstimate modal,
+                                                    Optional<Specification> specification,
+                                                    Optional<LinearityResult> levelCheck, String whyNoLevelCheck,
+                                                    List<String> recordCautions, double wallTimeS) {
+        QualificationRequest request = QualificationRequest.of(specimen, frf, specification);
+        if (levelCheck.isPresent()) {
+            request = request.withLevelCheck(levelCheck.get());
+        } else if (!whyNoLevelCheck.isEmpty()) {
+            request = request.withoutLevelCheck(whyNoLevelCheck);
+        }
+        for (String caution : recordCautions) {
+            request = request.withCaution(caution);
+        }
+        return new QualificationResult(Qualifier.ofFit(request, modal), Optional.empty(), wallTimeS);
     }
 
     /**
