@@ -178,6 +178,27 @@ public final class JsonFields {
     }
 
     /**
+     * A field holding an array of texts, possibly empty.
+     *
+     * @param field the field
+     * @return the texts, in order
+     */
+    public java.util.List<String> texts(String field) {
+        JsonNode value = node.get(field);
+        if (value == null || !value.isArray()) {
+            throw new AnalysisException(where + ": field \"" + field + "\" must be an array of texts");
+        }
+        java.util.List<String> out = new java.util.ArrayList<>();
+        for (int i = 0; i < value.size(); i++) {
+            if (!value.get(i).isTextual()) {
+                throw new AnalysisException(where + ", " + field + "[" + i + "] holds " + value.get(i) + "; expected text");
+            }
+            out.add(value.get(i).asText());
+        }
+        return out;
+    }
+
+    /**
      * A field holding {@code true} or {@code false}.
      *
      * @param field the field
