@@ -21,6 +21,9 @@ import org.tautline.app.qualify.DemoRun;
 import org.tautline.app.qualify.DemoScenario;
 import org.tautline.app.qualify.ResultText;
 import org.tautline.app.qualify.SweepStoppedException;
+import org.tautline.app.report.ResultFile;
+import org.tautline.app.report.RunDirectory;
+import org.tautline.app.trace.DataFile;
 import org.tautline.app.trace.SetupFile;
 import org.tautline.driver.sim.SimulationConfig;
 import org.tautline.driver.sim.SimulationConfigs;
@@ -170,9 +173,10 @@ final class DemoCommand implements Callable<Integer> {
         metadata.put("source", "Tautline demo on the simulated rig (invented specimen)");
         metadata.put("simulated specimen", simulated);
         metadata.putAll(DemoRecords.rigMetadata(outcome.truth().config()));
-        FrfCsvWriter.write(outcome.result().receptance(), metadata, dir.resolve("frf.csv"));
+        FrfCsvWriter.write(outcome.result().receptance(), metadata, dir.resolve(RunDirectory.FRF));
         ResultJson.MAPPER.writeValue(dir.resolve("truth.json").toFile(), json.get("truth"));
-        ResultJson.MAPPER.writeValue(dir.resolve("result.json").toFile(), json);
+        ResultFile.write(dir.resolve(RunDirectory.RESULT), json,
+                DataFile.sha256(Files.readAllBytes(dir.resolve(RunDirectory.FRF))));
         ResultJson.MAPPER.writeValue(dir.resolve("specimen.json").toFile(),
                 ResultJson.specimenFile(outcome.result().specimen()));
         ResultJson.MAPPER.writeValue(dir.resolve("spec.json").toFile(),

@@ -20,10 +20,15 @@ import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
-/** {@code tautline report}: the PDF report of a run directory, qualified again from its files. */
+/**
+ * {@code tautline report}: the PDF report of a run directory: the result its result.json records, or the FRF fitted
+ * again when there is none to take, which the report says.
+ */
 @Command(name = "report", mixinStandardHelpOptions = true,
-        description = "Write the PDF report of a run directory (frf.csv, specimen.json, spec.json), qualifying it"
-                + " again from its files. The test date, the air and the rig come from the run's setup.json (written"
+        description = "Write the PDF report of a run directory (frf.csv, specimen.json, spec.json, result.json)."
+                + " The modes reported are those result.json records when it names the SHA-256 of the folder's frf.csv"
+                + " (a result.json made from another frf.csv is refused); they are numbered and judged again. Without"
+                + " such a result.json the FRF is fitted again, and the report says so. The test date, the air and the rig come from the run's setup.json (written"
                 + " by sweep); the options fill in what it lacks, and a value that differs from a recorded one is"
                 + " refused. With --lot, the report also charts that lot from the register.",
         exitCodeListHeading = "%nExit status (the report is written in each case but an error):%n",

@@ -57,7 +57,7 @@ public final class QualificationReport {
             try (PageWriter w = new PageWriter(document, footer)) {
                 w.boldLine("Qualification report: specimen " + r.specimen().id(), 16, Color.BLACK);
                 TraceSections.header(run, info, specification).write(w);
-                verdict(r, TraceSections.expiredCalibrations(run, info)).write(w);
+                verdict(run, TraceSections.expiredCalibrations(run, info)).write(w);
                 TraceSections.instruments(run, info).write(w);
                 TraceSections.dataFiles(run).write(w);
                 ResultSections.specimen(r.specimen()).write(w);
@@ -67,7 +67,7 @@ public final class QualificationReport {
                 ReportCharts.lineQuality(r).ifPresentOrElse(chart -> new Section("Quality of the measurement")
                         .chart(chart, 160).write(w), () -> new Section("Quality of the measurement")
                         .line("The FRF file carries neither a coherence nor a quality figure per line.", 9).write(w));
-                ResultSections.modes(r).write(w);
+                ResultSections.modes(r, run.resultSource().sentence()).write(w);
                 ReportCharts.harmonicSeries(r).ifPresent(chart -> new Section("Harmonic series, tension and"
                         + " inharmonicity").chart(chart, 200).write(w));
                 ReportCharts.participation(r).ifPresent(chart -> new Section("Participation: measured and expected"
@@ -84,8 +84,9 @@ public final class QualificationReport {
         }
     }
 
-    /** The verdict banner with what stands against trusting it. */
-    private static Section verdict(QualificationResult r, List<String> expired) {
+    /** The verdict banner with what stands against trusting it, and whether the modes were recorded or fitted again. */
+    private static Section verdict(RunDirectory run, List<String> expired) {
+        QualificationResult r = run.result();
         Section s = new Section("").gap(4);
         if (r.verdict().isEmpty()) {
             s.boldLine("Verdict: none (no specification in the run)", 13, Color.DARK_GRAY);
@@ -98,6 +99,12 @@ public final class QualificationReport {
         }
         for (String e : expired) {
             s.boldLine(e, 9, FAIL);
+        }
+        ResultSource source = run.resultSource();
+        if (source.refitted()) {
+            s.boldLine(source.sentence(), 9, UNDECIDED);
+        } else if (!source.sentence().isEmpty()) {
+            s.line(source.sentence(), 9);
         }
         return s.line("Values are written as value ± u, u the standard uncertainty (coverage factor k = 1) rounded to two"
                 + " significant digits (GUM, JCGM 100:2008, 7.2.6); the limits use U = " + ReportText.FORMAT.number(

@@ -1,8 +1,10 @@
 package org.tautline.app.report;
 
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
+import org.hipparchus.complex.Complex;
 import org.tautline.analysis.format.QuantityFormat;
 import org.tautline.analysis.modal.FittedMode;
 import org.tautline.analysis.modal.Mode;
@@ -44,8 +46,11 @@ final class ResultSections {
         return s;
     }
 
-    static Section modes(QualificationResult r) {
+    static Section modes(QualificationResult r, String source) {
         Section s = new Section("Modes (estimate and standard error)");
+        if (!source.isEmpty()) {
+            s.line(source, 8);
+        }
         s.row(new String[] {"n", "pol.", "f (Hz)", "u (Hz)", "damping ratio", "u", "A (1/kg)", "u (1/kg)"}, MODE_COLUMNS,
                 true);
         for (QualifiedMode m : r.modes()) {
@@ -76,8 +81,24 @@ final class ResultSections {
                         + " (m/N)(rad/s)².", F.number(res.upper().getReal()), res.upper().getImaginary() < 0 ? "-" : "+",
                 F.number(Math.abs(res.upper().getImaginary())), F.number(res.lower().getReal()),
                 res.lower().getImaginary() < 0 ? "-" : "+", F.number(Math.abs(res.lower().getImaginary()))), 8);
+        beyondBand(s, res.outsideBand());
         r.modal().warnings().forEach(note -> s.line("Note: " + note, 8));
         return s;
+    }
+
+    /** The poles the fit holds beyond the band's edges, one line each, when there are any. */
+    private static void beyondBand(Section s, List<Mode> poles) {
+        if (poles.isEmpty()) {
+            return;
+        }
+        s.line(ResultFile.BEYOND_BAND_LABEL.substring(0, 1).toUpperCase(Locale.ROOT)
+                + ResultFile.BEYOND_BAND_LABEL.substring(1) + " (part of the residual terms, not modes of the specimen):", 8);
+        for (Mode p : poles) {
+            Complex a = p.modalConstant();
+            s.line(String.format(Locale.ROOT, "%s, damping ratio %s, modal constant %s %s %s j 1/kg", F.value(
+                    p.frequencyHz(), "Hz"), F.number(p.dampingRatio()), F.number(a.getReal()),
+                    a.getImaginary() < 0 ? "-" : "+", F.number(Math.abs(a.getImaginary()))), 8);
+        }
     }
 
     static Section properties(QualificationResult r) {

@@ -31,12 +31,17 @@ import org.tautline.app.trace.SetupFile;
 
 /**
  * A run directory as {@code demo --out} writes it: {@code frf.csv} and {@code specimen.json} (required),
- * {@code spec.json} (optional: without it no limit is judged), {@code result.json} (optional: without it there is
- * no level check and no recorded sweep) and {@code setup.json} (optional: the test date, the air and the rig,
- * {@link SetupFile}). A file that is there must be readable: a folder, an empty file, a link to
- * nothing or content that cannot be read is refused, naming it, before anything is analysed. The qualification is
- * re-derived from these files; the fit is deterministic, so it gives the figures of the run. The level check needs
- * the rig, so its shifts are read from {@code result.json}.
+ * {@code spec.json} (optional: without it no limit is judged), {@code result.json} (optional: the recorded result,
+ * level check and sweep) and {@code setup.json} (optional: the test date, the air and the rig, {@link SetupFile}). A
+ * file that is there must be readable: a folder, an empty file, a link to nothing or content that cannot be read is
+ * refused, naming it, before anything is analysed.
+ *
+ * <p>The result reported is the recorded one: when {@code result.json} records the modes and names the SHA-256 of the
+ * {@code frf.csv} it was made from, and that is this folder's {@code frf.csv}, the recorded modes are taken as they are
+ * (a fit from poles chosen by hand in the workbench cannot be repeated from the FRF alone) and numbered and judged
+ * again ({@link RecordedFit}); a {@code result.json} naming another FRF is refused. Otherwise the FRF is fitted again
+ * and {@link #resultSource} says so and why. The level check needs the rig, so its shifts are always read from
+ * {@code result.json}.
  *
  * @param directory the directory
  * @param result the qualification re-derived from its files
@@ -47,16 +52,18 @@ import org.tautline.app.trace.SetupFile;
  * @param setup the run's recorded setup (test date, air, rig), {@link RunSetup#NONE} when none was recorded
  * @param dataFiles every file of the folder the result rests on, with its SHA-256; empty when it was not read from
  *        files
+ * @param resultSource how the result's modes were obtained (taken as recorded, or fitted again and why)
  */
 public record RunDirectory(Path directory, QualificationResult result, Map<String, String> metadata,
-                           Optional<String> recordedSweep, String frfSha256, RunSetup setup, List<DataFile> dataFiles) {
+                           Optional<String> recordedSweep, String frfSha256, RunSetup setup, List<DataFile> dataFiles,
+                           ResultSource resultSource) {
     /** The FRF file name. */
     public static final String FRF = "frf.csv";
     /** The specimen file name. */
     public static final String SPECIMEN = "specimen.json";
     /** The specification file name. */
     public static final String SPECIFICATION = "spec.json";
-    /** The recorded result; its level check is taken over, everything else is derived again. */
+    /** The recorded result: its modes are reported (when made from this folder's FRF) and its level check taken over. */
     public static final String RESULT = "result.json";
 
     /** Copies the metadata and the files. */
@@ -76,7 +83,7 @@ public record RunDirectory(Path directory, QualificationResult result, Map<Strin
      */
     public RunDirectory(Path directory, QualificationResult result, Map<String, String> metadata,
                         Optional<String> recordedSweep, String frfSha256) {
-        this(directory, result, metadata, recordedSweep, frfSha256, RunSetup.NONE, List.of());
+        this(directory, result, metadata, recordedSweep, frfSha256, RunSetup.NONE, List.of(), ResultSource.NONE);
     }
 
     /**
@@ -104,10 +111,11 @@ public record RunDirectory(Path directory, QualificationResult result, Map<Strin
      * @param frfSha256 the SHA-256 of the {@code frf.csv} bytes, lower-case hex
      * @param setup the recorded setup, {@link RunSetup#NONE} without {@code setup.json}
      * @param dataFiles the files read, with their SHA-256
+     * @param recorded the fit {@code result.json} records, or why the FRF is to be fitted again
      */
     public record Inputs(Path directory, Specimen specimen, Optional<Specification> specification,
                          FrfCsvReader.Contents frf, Optional<LinearityResult> levelCheck, Optional<String> recordedSweep,
-                         String frfSha256, RunSetup setup, List<DataFile> dataFiles) {
+                         String frfSha256, RunSetup setup, List<DataFile> dataFiles, RecordedFit.Reading recorded) {
         /** Copies the files. */
         public Inputs {
             dataFiles = List.copyOf(dataFiles);
@@ -120,7 +128,7 @@ public record RunDirectory(Path directory, QualificationResult result, Map<Strin
          */
         public Inputs withSetup(RunSetup given) {
             return new Inputs(directory, specimen, specification, frf, levelCheck, recordedSweep, frfSha256,
-                    setup.with(given, directory.resolve(SetupFile.NAME).toString()), dataFiles);
+                    setup.with(given, directory.resolve(SetupFile.NAME).toString()), dataFiles, recorded);
         }
     }
 
@@ -160,18 +168,20 @@ public record RunDirectory(Path directory, QualificationResult result, Map<Strin
         Specimen specimen = SpecimenFile.read(directory.resolve(SPECIMEN));
         Optional<Specification> specification = judged ? Optional.of(SpecificationFile.read(directory.resolve(SPECIFICATION)))
                 : Optional.empty();
+        Path frfFile = directory.resolve(FRF);
+        byte[] frfBytes = bytes(directory, FRF);
+        FrfCsvReader.Contents frf = FrfCsvReader.read(new ByteArrayInputStream(frfBytes), frfFile.toString());
         Optional<LinearityResult> levels = Optional.empty();
         Optional<String> sweep = Optional.empty();
+        RecordedFit.Reading fit = RecordedFit.Reading.refit(RecordedFit.NO_RESULT_FILE);
         if (recorded) {
             Path resultFile = directory.resolve(RESULT);
             JsonFields result = JsonFields.read(resultFile, LevelCheckFile.WHAT);
             levels = LevelCheckFile.levelCheck(resultFile, result);
             sweep = LevelCheckFile.sweepLine(resultFile, result);
+            fit = RecordedFit.read(result, frf.frf(), sha256(frfBytes));
         }
         RunSetup setup = setUp ? SetupFile.read(directory) : RunSetup.NONE;
-        Path frfFile = directory.resolve(FRF);
-        byte[] frfBytes = bytes(directory, FRF);
-        FrfCsvReader.Contents frf = FrfCsvReader.read(new ByteArrayInputStream(frfBytes), frfFile.toString());
         List<DataFile> files = new ArrayList<>();
         files.add(DataFile.of(FRF, frfBytes));
         for (String name : new String[] {SPECIMEN, SPECIFICATION, RESULT, SetupFile.NAME}) {
@@ -179,24 +189,37 @@ public record RunDirectory(Path directory, QualificationResult result, Map<Strin
                 files.add(DataFile.of(name, bytes(directory, name)));
             }
         }
-        return new Inputs(directory, specimen, specification, frf, levels, sweep, sha256(frfBytes), setup, files);
+        return new Inputs(directory, specimen, specification, frf, levels, sweep, sha256(frfBytes), setup, files, fit);
     }
 
     /**
-     * Qualifies checked inputs again.
+     * Qualifies checked inputs: the recorded fit numbered and judged again, or, without one, the FRF fitted again.
      *
      * @param in the run's inputs
      * @return the run
      */
     public static RunDirectory analyse(Inputs in) {
-        QualificationResult result = Qualification.analyse(in.specimen(), in.frf().frf(), Optional.empty(),
-                ModalEstimator.defaults(), in.specification(), System.nanoTime());
-        if (in.levelCheck().isPresent()) {
-            result = Qualification.withLinearity(result, in.levelCheck().get(), in.specification());
+        QualificationResult result;
+        List<String> cautions = new ArrayList<>();
+        ResultSource source;
+        if (in.recorded().fit().isPresent()) {
+            RecordedFit fit = in.recorded().fit().get();
+            result = Qualification.ofRecordedFit(in.specimen(), in.frf().frf(), fit.modal(), in.specification(),
+                    in.levelCheck(), fit.whyNoLevelCheck(), fit.recordCautions(), fit.wallTimeS());
+            fit.disagreement(result).ifPresent(cautions::add);
+            source = ResultSource.RECORDED;
+        } else {
+            result = Qualification.analyse(in.specimen(), in.frf().frf(), Optional.empty(), ModalEstimator.defaults(),
+                    in.specification(), System.nanoTime());
+            if (in.levelCheck().isPresent()) {
+                result = Qualification.withLinearity(result, in.levelCheck().get(), in.specification());
+            }
+            source = ResultSource.refitted(in.recorded().refitReason());
         }
-        result = Qualification.withCautions(result, Calibrations.expired(in.setup(), java.time.Instant.now()));
+        cautions.addAll(Calibrations.expired(in.setup(), java.time.Instant.now()));
+        result = Qualification.withCautions(result, cautions);
         return new RunDirectory(in.directory(), result, in.frf().metadata(), in.recordedSweep(), in.frfSha256(),
-                in.setup(), in.dataFiles());
+                in.setup(), in.dataFiles(), source);
     }
 
     /**

@@ -28,8 +28,11 @@ import org.tautline.app.trace.SetupFile;
 /**
  * Writes a qualification made in the workbench as a run folder of the form {@link RunDirectory} reads:
  * {@code frf.csv} (the measured FRF as receptance, with what is known of the rig and the plan), {@code specimen.json},
- * {@code spec.json} (when limits were judged) and {@code setup.json} (test date, air, rig). The report made from the
- * folder names the SHA-256 of each of these files, and {@code tautline report} can read the folder again.
+ * {@code spec.json} (when limits were judged), {@code result.json} (the result as it is on show, with the poles chosen
+ * by hand and the level check of the run, in the form {@code demo --out} writes, naming the SHA-256 of
+ * {@code frf.csv}) and {@code setup.json} (test date, air, rig). The report made from the folder names the SHA-256 of
+ * each of these files, and {@code tautline report} reads the folder again to the same modes and verdict, without
+ * fitting the FRF again ({@link RecordedFit}).
  */
 public final class RunFolderWriter {
     private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
@@ -59,15 +62,18 @@ public final class RunFolderWriter {
         if (specification.isPresent()) {
             JSON.writeValue(folder.resolve(RunDirectory.SPECIFICATION).toFile(), specificationFile(specification.get()));
         }
+        ResultFile.write(folder.resolve(RunDirectory.RESULT), result,
+                DataFile.sha256(Files.readAllBytes(folder.resolve(RunDirectory.FRF))));
         SetupFile.write(folder, setup);
         List<DataFile> files = new ArrayList<>();
-        for (String name : List.of(RunDirectory.FRF, RunDirectory.SPECIMEN, RunDirectory.SPECIFICATION, SetupFile.NAME)) {
+        for (String name : List.of(RunDirectory.FRF, RunDirectory.SPECIMEN, RunDirectory.SPECIFICATION,
+                RunDirectory.RESULT, SetupFile.NAME)) {
             Path file = folder.resolve(name);
             if (Files.exists(file, LinkOption.NOFOLLOW_LINKS)) {
                 files.add(DataFile.of(name, Files.readAllBytes(file)));
             }
         }
-        return new RunDirectory(folder, result, metadata, recordedSweep, files.get(0).sha256(), setup, files);
+        return new RunDirectory(folder, result, metadata, recordedSweep, files.get(0).sha256(), setup, files, ResultSource.SHOWN);
     }
 
     /**
