@@ -1,10 +1,8 @@
 package org.tautline.app.ui.results;
 
-import java.util.List;
 import java.util.Optional;
 
 import org.tautline.analysis.modal.ModeSelection;
-import org.tautline.analysis.verdict.LimitResult;
 import org.tautline.analysis.verdict.Specification;
 import org.tautline.app.qualify.Qualification;
 import org.tautline.app.qualify.QualificationResult;
@@ -26,15 +24,13 @@ final class Refit {
     }
 
     /**
-     * The limits a result was judged against, read back from its verdict.
+     * The specification a result was judged against, with its name and revision, so that a refit exported as a run
+     * folder names the specification it was judged against.
      *
      * @param result a result
-     * @return the limits, absent when the result has no verdict
+     * @return the specification, absent when the result has no verdict
      */
     static Optional<Specification> specificationOf(QualificationResult result) {
-        return result.verdict().map(v -> {
-            List<org.tautline.analysis.verdict.Limit> limits = v.results().stream().map(LimitResult::limit).toList();
-            return new Specification("limits of the earlier verdict", limits);
-        });
+        return result.assessment().request().specification();
     }
 }

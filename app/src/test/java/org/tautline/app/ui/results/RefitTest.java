@@ -46,6 +46,8 @@ class RefitTest {
         assertEquals(SyntheticWire.TENSION_N, refit.tension().orElseThrow().tensionN(), 0.01 * SyntheticWire.TENSION_N);
         assertTrue(refit.verdict().isPresent(), "the refit is judged against the same limits");
         assertEquals(original.verdict().orElseThrow().results().size(), refit.verdict().orElseThrow().results().size());
+        assertEquals(original.assessment().request().specification(), refit.assessment().request().specification(),
+                "judged against the same specification, its name and revision kept for the exported spec.json");
     }
 
     @Test
