@@ -157,6 +157,27 @@ class RecordedFitTest {
     }
 
     @Test
+    void aRecordedFitThatIsNotWholeIsRefusedNamingThePlace(@TempDir Path dir) throws Exception {
+        Path file = dir.resolve(RunDirectory.RESULT);
+        ObjectNode json = ResultFile.json(wire);
+        ((ObjectNode) json.get("modes").get(1)).remove("dampingRatio");
+        ResultFile.write(file, json, sha(wire));
+        AnalysisException e = assertThrows(AnalysisException.class, () -> readBack(file, wire, sha(wire)));
+        assertEquals(file + ", modes[1]: field \"dampingRatio\" is missing; expected a number", e.getMessage());
+        json = ResultFile.json(wire);
+        ((ObjectNode) json.get("modes").get(0)).put("frequencyHz", -5.0);
+        ResultFile.write(file, json, sha(wire));
+        e = assertThrows(AnalysisException.class, () -> readBack(file, wire, sha(wire)));
+        assertEquals(file + ", modes[0]: mode frequencyHz must be positive and finite, got -5.0; expected a mode as the"
+                + " fit records it", e.getMessage());
+        json = ResultFile.json(wire);
+        ((ObjectNode) json.get("residuals")).remove("polesBeyondBand");
+        ResultFile.write(file, json, sha(wire));
+        e = assertThrows(AnalysisException.class, () -> readBack(file, wire, sha(wire)));
+        assertEquals(file + ", residuals: field \"polesBeyondBand\" must be an object", e.getMessage());
+    }
+
+    @Test
     void aRecordedLimitResultTheJudgingNoLongerGivesIsSaid(@TempDir Path dir) throws Exception {
         Path file = dir.resolve(RunDirectory.RESULT);
         ObjectNode json = ResultFile.json(wire);
