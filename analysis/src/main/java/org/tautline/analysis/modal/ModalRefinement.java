@@ -21,7 +21,10 @@ import org.tautline.analysis.frf.Frf;
  * <li>variance unknown (uniform or explicit relative weights): covariance = s^2 (J^T J)^-1 with
  *     s^2 = chi^2/(2N - p) the residual variance per real component.</li>
  * </ul>
- * The standard errors of f_n, zeta and A follow by the chain rule of the parameter scaling.
+ * The standard errors of f_n, zeta and A follow by the chain rule of the parameter scaling. (J^T J)^-1 comes from the
+ * eigen-decomposition of the column-scaled J^T J when J's scaled condition number is at most
+ * {@link WellConditionedInverse#MAX_CONDITION}, where that loses no accuracy worth having, and otherwise from a Householder
+ * QR of J with an SVD of its triangle, which also tells a degenerate model (two merged modes) from a nearly degenerate one.
  */
 public final class ModalRefinement {
     private static final String WHAT = "modal refinement";
@@ -86,14 +89,16 @@ public final class ModalRefinement {
         double chiSquare = optimum.cost();
         double perComponent = chiSquare / (2 * m - p);
         double scale = lines.absolute() ? 0.5 : perComponent;
-        double[][] columns = model.jacobianColumns(point, null);
-        LsfdLeastSquares factor = LsfdLeastSquares.solve(columns, null);
-        if (!factor.fullRank()) {
-            throw new AnalysisException(WHAT + " is degenerate at the solution: the scaled Jacobian has condition number "
-                    + factor.conditionNumber() + " (limit " + LsfdLeastSquares.MAX_CONDITION + ") for " + p
-                    + " unknowns; two modes have merged or a parameter has no effect on the " + m + " lines");
+        double[][] covariance = WellConditionedInverse.of(model, point, target);
+        if (covariance == null) {
+            LsfdLeastSquares factor = LsfdLeastSquares.solve(model.jacobianColumns(point, null), null);
+            if (!factor.fullRank()) {
+                throw new AnalysisException(WHAT + " is degenerate at the solution: the scaled Jacobian has condition number "
+                        + factor.conditionNumber() + " (limit " + LsfdLeastSquares.MAX_CONDITION + ") for " + p
+                        + " unknowns; two modes have merged or a parameter has no effect on the " + m + " lines");
+            }
+            covariance = factor.inverseNormal();
         }
-        double[][] covariance = factor.inverseNormal();
         for (double[] row : covariance) {
             for (int j = 0; j < row.length; j++) {
                 row[j] *= scale;
