@@ -51,45 +51,11 @@ public final class Lsfd {
             throw new AnalysisException("LSFD needs options, got none; use LsfdOptions.defaults()");
         }
         checkPoles(poles);
-        LsfdLines lines = LsfdLines.select(WHAT, frf, options.fromHz(), options.toHz(), options.weights());
-        int perMode = options.realModes() ? 1 : 2;
-        List<Pole> outside = options.outsideBandPoles();
-        int unknowns = perMode * poles.size() + (options.upperResidual() ? 2 : 0) + (options.lowerResidual() ? 2 : 0)
-                + 2 * outside.size();
-        FitQuality.requireFittable(WHAT, lines.size(), unknowns, lines.peakMagnitude(), lines.minimumMagnitude());
+        LinearSystem system = system(frf, poles, options);
+        LsfdLines lines = system.lines();
         int m = lines.size();
-        double[][] columns = new double[unknowns][2 * m];
-        double[] rhs = new double[2 * m];
-        for (int k = 0; k < m; k++) {
-            double w = lines.angularFrequency(k);
-            double root = Math.sqrt(lines.weight(k));
-            rhs[2 * k] = root * lines.real(k);
-            rhs[2 * k + 1] = root * lines.imag(k);
-            int c = 0;
-            for (Pole pole : poles) {
-                double wn = pole.angularFrequencyRadPerS();
-                Complex inverse = new Complex(wn * wn - w * w, -2 * pole.real() * w).reciprocal();
-                put(columns[c++], k, root, inverse.getReal(), inverse.getImaginary());
-                if (!options.realModes()) {
-                    put(columns[c++], k, root, -inverse.getImaginary(), inverse.getReal());
-                }
-            }
-            if (options.upperResidual()) {
-                put(columns[c++], k, root, 1, 0);
-                put(columns[c++], k, root, 0, 1);
-            }
-            if (options.lowerResidual()) {
-                double g = -1 / (w * w);
-                put(columns[c++], k, root, g, 0);
-                put(columns[c++], k, root, 0, g);
-            }
-            for (Pole pole : outside) {
-                double wn = pole.angularFrequencyRadPerS();
-                Complex inverse = new Complex(wn * wn - w * w, -2 * pole.real() * w).reciprocal();
-                put(columns[c++], k, root, inverse.getReal(), inverse.getImaginary());
-                put(columns[c++], k, root, -inverse.getImaginary(), inverse.getReal());
-            }
-        }
+        double[][] columns = system.columns();
+        double[] rhs = system.rhs();
         LsfdLeastSquares solve = LsfdLeastSquares.solve(columns, rhs);
         if (!solve.fullRank()) {
             throw new AnalysisException("LSFD cannot separate the unknowns: the scaled least-squares system has condition "
@@ -116,7 +82,7 @@ public final class Lsfd {
             c += 2;
         }
         List<Mode> beyond = new ArrayList<>();
-        for (Pole pole : outside) {
+        for (Pole pole : options.outsideBandPoles()) {
             beyond.add(new Mode(pole.frequencyHz(), pole.dampingRatio(), new Complex(x[c], x[c + 1])));
             c += 2;
         }
@@ -140,6 +106,99 @@ public final class Lsfd {
             residues[i] = poles.get(i).residueOf(modes.get(i).modalConstant());
         }
         return residues;
+    }
+
+    /**
+     * The weighted linear system of an LSFD fit: one column per real unknown (modes, residual terms, poles beyond the
+     * band, in that order), the real and imaginary parts of each line stacked and multiplied by the root of its weight.
+     *
+     * @param columns the columns, 2m values each
+     * @param rhs the weighted measured values, 2m
+     * @param lines the lines
+     */
+    record LinearSystem(double[][] columns, double[] rhs, LsfdLines lines) {
+    }
+
+    /**
+     * Builds the weighted system of an LSFD fit without solving it.
+     *
+     * @param frf the measured FRF, any quantity
+     * @param poles the fixed poles, at least one
+     * @param options real or complex modes, residual terms, band, weights
+     * @return the system
+     */
+    static LinearSystem system(Frf frf, List<Pole> poles, LsfdOptions options) {
+        LsfdLines lines = LsfdLines.select(WHAT, frf, options.fromHz(), options.toHz(), options.weights());
+        int perMode = options.realModes() ? 1 : 2;
+        List<Pole> outside = options.outsideBandPoles();
+        int unknowns = perMode * poles.size() + (options.upperResidual() ? 2 : 0) + (options.lowerResidual() ? 2 : 0)
+                + 2 * outside.size();
+        FitQuality.requireFittable(WHAT, lines.size(), unknowns, lines.peakMagnitude(), lines.minimumMagnitude());
+        int m = lines.size();
+        double[][] columns = new double[unknowns][2 * m];
+        double[] rhs = new double[2 * m];
+        double[] wn2 = new double[poles.size()];
+        double[] real = new double[poles.size()];
+        for (int r = 0; r < poles.size(); r++) {
+            double wn = poles.get(r).angularFrequencyRadPerS();
+            wn2[r] = wn * wn;
+            real[r] = poles.get(r).real();
+        }
+        for (int k = 0; k < m; k++) {
+            double w = lines.angularFrequency(k);
+            double root = Math.sqrt(lines.weight(k));
+            rhs[2 * k] = root * lines.real(k);
+            rhs[2 * k + 1] = root * lines.imag(k);
+            int c = 0;
+            for (int r = 0; r < poles.size(); r++) {
+                // 1/D with D = wn^2 - w^2 + 2 j zeta wn w = wn^2 - w^2 - 2 j Re(lambda) w, in plain arithmetic.
+                double dr = wn2[r] - w * w;
+                double di = -2 * real[r] * w;
+                double d2 = dr * dr + di * di;
+                double invRe = dr / d2;
+                double invIm = -di / d2;
+                put(columns[c++], k, root, invRe, invIm);
+                if (!options.realModes()) {
+                    put(columns[c++], k, root, -invIm, invRe);
+                }
+            }
+            if (options.upperResidual()) {
+                put(columns[c++], k, root, 1, 0);
+                put(columns[c++], k, root, 0, 1);
+            }
+            if (options.lowerResidual()) {
+                double g = -1 / (w * w);
+                put(columns[c++], k, root, g, 0);
+                put(columns[c++], k, root, 0, g);
+            }
+            for (Pole pole : outside) {
+                c = poleColumns(columns, c, k, root, w, pole);
+            }
+        }
+        return new LinearSystem(columns, rhs, lines);
+    }
+
+    /**
+     * The two weighted columns of a pole beyond the band on the system's lines: its receptance basis 1/D and j/D.
+     *
+     * @param lines the lines of a system
+     * @param pole the pole
+     * @return two columns of 2m values
+     */
+    static double[][] poleColumns(LsfdLines lines, Pole pole) {
+        double[][] columns = new double[2][2 * lines.size()];
+        for (int k = 0; k < lines.size(); k++) {
+            poleColumns(columns, 0, k, Math.sqrt(lines.weight(k)), lines.angularFrequency(k), pole);
+        }
+        return columns;
+    }
+
+    private static int poleColumns(double[][] columns, int c, int k, double root, double w, Pole pole) {
+        double wn = pole.angularFrequencyRadPerS();
+        Complex inverse = new Complex(wn * wn - w * w, -2 * pole.real() * w).reciprocal();
+        put(columns[c], k, root, inverse.getReal(), inverse.getImaginary());
+        put(columns[c + 1], k, root, -inverse.getImaginary(), inverse.getReal());
+        return c + 2;
     }
 
     private static void checkPoles(List<Pole> poles) {

@@ -171,6 +171,25 @@ final class ModalCandidate {
                 }
             }
         }
+        return localFit(h, current, kept, near, fresh, options);
+    }
+
+    /**
+     * The whole model with only some of its modes fitted anew, with new poles, the residual terms and the coefficients
+     * of the poles beyond the band that the options hold: the other modes are held and their response taken off the
+     * measured one, so the cost of the fit is that of the whole model.
+     *
+     * @param h the measured receptance
+     * @param current the model now
+     * @param kept the indices of the current model's modes kept, in order
+     * @param near which of the current model's modes (by index) are fitted anew
+     * @param fresh new poles, put after the kept modes (none for a pole beyond the band, which the options hold)
+     * @param options the refinement options
+     * @return the model, or null when the fit fails or leaves a mode the rules of {@link #checked} refuse
+     */
+    static ModalRefinementResult localFit(Frf h, ModalRefinementResult current, List<Integer> kept, boolean[] near,
+                                          List<Pole> fresh, ModalRefinementOptions options) {
+        List<FittedMode> modes = current.modes();
         List<Mode> held = new ArrayList<>();
         List<Pole> free = new ArrayList<>();
         for (int i : kept) {
@@ -219,7 +238,7 @@ final class ModalCandidate {
      * called for it), within {@value #WINDOW_LINES} line spacings of another mode in an FRF from windowed spectra, or
      * with its half-power band reaching the band's edge guard.
      */
-    private static ModalRefinementResult checked(Frf h, ModalRefinementResult next, List<Pole> starts,
+    static ModalRefinementResult checked(Frf h, ModalRefinementResult next, List<Pole> starts,
                                                  ModalRefinementOptions options) {
         double lowHz = Math.max(options.lines().fromHz(), h.frequencyHz(0));
         double highHz = Math.min(options.lines().toHz(), h.frequencyHz(h.size() - 1));

@@ -37,7 +37,7 @@ final class ModalRepair {
     /** Outer fraction of the band, at each edge, whose residual calls for a pole beyond that edge. */
     static final double EDGE_REGION = 0.15;
     /** Most poles beyond each edge. */
-    static final int POLES_PER_EDGE = 2;
+    static final int POLES_PER_EDGE = 3;
     /** Nearest a pole beyond an edge may lie, in band widths from the edge. */
     static final double NEAREST = 0.005;
     /** Farthest a pole beyond an edge may lie, in band widths from the edge. */
@@ -94,32 +94,78 @@ final class ModalRepair {
         double width = highHz - lowHz;
         ModalRefinementResult current = fit;
         ModalRefinementOptions currentOptions = options;
-        for (int attempt = 0; attempt < 2 * POLES_PER_EDGE; attempt++) {
-            boolean above = attempt % 2 == 0;
-            double from = above ? highHz - EDGE_REGION * width : lowHz;
-            double to = above ? highHz : lowHz + EDGE_REGION * width;
-            // Unscaled: the misfit the modes beyond an edge leave spreads over the whole band and raises its scale.
-            if (!detected(h, variance, lowHz, highHz, current, from, to, false)) {
-                continue;
-            }
-            List<Pole> inside = ModalCandidate.poles(current);
-            Outside found = bestOutsidePole(h, inside, currentOptions, above ? highHz : lowHz, above ? width : -width);
-            if (found == null || found.share() < minShare) {
-                continue;
-            }
-            ModalRefinementOptions best = found.options();
-            // Every mode moves when the band's edge is described anew: the whole refinement is allowed.
-            ModalRefinementResult candidate = ModalCandidate.refit(h, inside, best, best.maxIterations());
-            // A mode that leaves the band once the edge is described stood in for the modes beyond it; the search
-            // that follows finds it again if it was a mode.
-            if (candidate != null && insideCount(candidate, lowHz, highHz) <= insideCount(current, lowHz, highHz)
-                    && ModalCandidate.better(h, variance, lowHz, highHz, current, candidate)) {
-                current = candidate;
-                currentOptions = best;
+        int[] keptPerEdge = new int[2];
+        boolean progress = true;
+        // Rounds of one try at each edge, while a round keeps a pole: a pole refused at one edge may be kept once the
+        // other edge is described, as the misfit it had to explain is then smaller.
+        while (progress) {
+            progress = false;
+            for (int edge = 0; edge < 2; edge++) {
+                boolean above = edge == 0;
+                if (keptPerEdge[edge] >= POLES_PER_EDGE) {
+                    continue;
+                }
+                double from = above ? highHz - EDGE_REGION * width : lowHz;
+                double to = above ? highHz : lowHz + EDGE_REGION * width;
+                // Unscaled: the misfit the modes beyond an edge leave spreads over the whole band and raises its scale.
+                if (!detected(h, variance, lowHz, highHz, current, from, to, false)) {
+                    continue;
+                }
+                List<Pole> inside = ModalCandidate.poles(current);
+                Outside found = bestOutsidePole(h, inside, currentOptions, above ? highHz : lowHz, above ? width : -width);
+                if (found == null || found.share() < minShare) {
+                    continue;
+                }
+                ModalRefinementOptions best = found.options();
+                // The modes near the edge, the residual terms and every pole beyond the band are fitted anew; the
+                // whole model is refined once the edges are described.
+                ModalRefinementResult candidate = ModalCandidate.localFit(h, current,
+                        java.util.stream.IntStream.range(0, current.modes().size()).boxed().toList(),
+                        nearEdge(current, above ? highHz : lowHz, width), List.of(), best);
+                // A mode that leaves the band once the edge is described stood in for the modes beyond it; the search
+                // that follows finds it again if it was a mode.
+                if (candidate != null && insideCount(candidate, lowHz, highHz) <= insideCount(current, lowHz, highHz)
+                        && ModalCandidate.better(h, variance, lowHz, highHz, current, candidate)) {
+                    current = candidate;
+                    currentOptions = best;
+                    keptPerEdge[edge]++;
+                    progress = true;
+                }
             }
         }
-        return new Edges(current, currentOptions);
+        if (current == fit) {
+            return new Edges(fit, options);
+        }
+        ModalRefinementResult whole;
+        try {
+            whole = ModalRefinement.refine(h, ModalFit.plain(current), current.residualTerms(), currentOptions);
+        } catch (AnalysisException e) {
+            return new Edges(fit, options);
+        }
+        whole = ModalCandidate.checked(h, whole, List.of(), currentOptions);
+        return whole == null ? new Edges(fit, options) : new Edges(whole, currentOptions);
     }
+
+    /**
+     * The modes fitted anew when a pole beyond an edge is tried: those within {@value #NEAR_EDGE} of the band's width
+     * of that edge, and at least the {@value ModalCandidate#LOCAL_NEIGHBOURS} nearest to it. The modes beyond an edge act
+     * most on the modes near it; those farther in move little and are refined with the whole model afterwards.
+     */
+    private static boolean[] nearEdge(ModalRefinementResult current, double edgeHz, double widthHz) {
+        List<FittedMode> modes = current.modes();
+        boolean[] near = new boolean[modes.size()];
+        Integer[] order = java.util.stream.IntStream.range(0, modes.size()).boxed().toArray(Integer[]::new);
+        java.util.Arrays.sort(order, java.util.Comparator.comparingDouble(
+                r -> Math.abs(modes.get(r).mode().frequencyHz() - edgeHz)));
+        for (int i = 0; i < order.length; i++) {
+            double distance = Math.abs(modes.get(order[i]).mode().frequencyHz() - edgeHz);
+            near[order[i]] = i < ModalCandidate.LOCAL_NEIGHBOURS || distance <= NEAR_EDGE * widthHz;
+        }
+        return near;
+    }
+
+    /** Fraction of the band's width, from an edge, within which modes are fitted anew with a pole beyond that edge. */
+    static final double NEAR_EDGE = 2 * EDGE_REGION;
 
     /**
      * The outcome of the poles beyond the edges.
@@ -147,19 +193,23 @@ final class ModalRepair {
         Frf h = decimated(full, options.lines().fromHz(), options.lines().toHz());
         ModalRefinementOptions searchOptions = ModalRefinementOptions.of(options.lines().withWeights(
                 decimatedWeights(full, options.lines().weights(), options.lines().fromHz(), options.lines().toHz())));
-        java.util.function.BiFunction<Double, Double, ModalRefinementOptions> withPole = (distance, zeta) -> {
+        // The system of the poles held is factored once; each place tried adds only the new pole's two columns.
+        Lsfd.LinearSystem held;
+        try {
+            held = Lsfd.system(h, inside, searchOptions.lines());
+        } catch (AnalysisException e) {
+            return null;
+        }
+        LsfdLeastSquares.Factor factor = LsfdLeastSquares.factor(held.columns(), held.rhs());
+        java.util.function.BiFunction<Double, Double, Pole> poleAt = (distance, zeta) -> {
             double f = edgeHz + distance * signedWidthHz;
-            if (!(f > 0)) {
-                return null;
-            }
-            List<Pole> outside = new ArrayList<>(options.lines().outsideBandPoles());
-            outside.add(Pole.of(f, zeta));
-            return ModalRefinementOptions.of(searchOptions.lines().withOutsideBandPoles(outside));
+            return f > 0 ? Pole.of(f, zeta) : null;
         };
-        java.util.function.DoubleUnaryOperator cost = logDistance -> {
-            ModalRefinementOptions o = withPole.apply(Math.exp(logDistance), SEARCH_DAMPING);
-            return o == null ? Double.POSITIVE_INFINITY : lsfdCost(h, inside, o);
+        java.util.function.BiFunction<Double, Double, Double> costAt = (distance, zeta) -> {
+            Pole pole = poleAt.apply(distance, zeta);
+            return pole == null ? Double.POSITIVE_INFINITY : factor.residualWith(Lsfd.poleColumns(held.lines(), pole));
         };
+        java.util.function.DoubleUnaryOperator cost = logDistance -> costAt.apply(Math.exp(logDistance), SEARCH_DAMPING);
         double from = Math.log(NEAREST);
         double step = (Math.log(FARTHEST) - from) / (GRID - 1);
         int bestIndex = 0;
@@ -197,20 +247,20 @@ final class ModalRepair {
             }
         }
         double distance = Math.exp(c1 < c2 ? x1 : x2);
-        ModalRefinementOptions best = withPole.apply(distance, SEARCH_DAMPING);
-        double bestAtDistance = lsfdCost(h, inside, best);
+        double bestZeta = SEARCH_DAMPING;
+        double bestAtDistance = costAt.apply(distance, SEARCH_DAMPING);
         for (double zeta : new double[] {SEARCH_DAMPING / 3, SEARCH_DAMPING * 3}) {
-            ModalRefinementOptions o = withPole.apply(distance, zeta);
-            double c = lsfdCost(h, inside, o);
+            double c = costAt.apply(distance, zeta);
             if (c < bestAtDistance) {
                 bestAtDistance = c;
-                best = o;
+                bestZeta = zeta;
             }
         }
-        double without = lsfdCost(h, inside, searchOptions);
+        double without = factor.residual();
         double share = (without - bestAtDistance) / Math.max(without - h.size(), Double.MIN_NORMAL);
-        return new Outside(ModalRefinementOptions.of(options.lines().withOutsideBandPoles(best.lines().outsideBandPoles())),
-                share);
+        List<Pole> outside = new ArrayList<>(options.lines().outsideBandPoles());
+        outside.add(poleAt.apply(distance, bestZeta));
+        return new Outside(ModalRefinementOptions.of(options.lines().withOutsideBandPoles(outside)), share);
     }
 
     /**
@@ -268,26 +318,6 @@ final class ModalRepair {
             }
         }
         return keep;
-    }
-
-    /** The weighted cost of the LSFD fit of fixed poles, or infinity when it cannot be fitted. */
-    private static double lsfdCost(Frf h, List<Pole> poles, ModalRefinementOptions options) {
-        LsfdResult fit;
-        try {
-            fit = Lsfd.fit(h, poles, options.lines());
-        } catch (AnalysisException e) {
-            return Double.POSITIVE_INFINITY;
-        }
-        double[] w = options.lines().weights();
-        Complex[] r = FitResidual.of(h, new double[h.size()], fit.modes(), fit.residualTerms(), true).residual();
-        double cost = 0;
-        for (int k = 0; k < h.size(); k++) {
-            double f = h.frequencyHz(k);
-            if (f >= options.lines().fromHz() && f <= options.lines().toHz()) {
-                cost += w[k] * r[k].norm() * r[k].norm();
-            }
-        }
-        return cost;
     }
 
     /**
