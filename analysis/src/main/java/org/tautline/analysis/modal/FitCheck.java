@@ -28,6 +28,12 @@ import org.tautline.analysis.frf.Frf;
 final class FitCheck {
     /** Smallest misfit, relative to the response over the window, that counts as material. */
     static final double MATERIAL = 0.05;
+    /**
+     * Smallest misfit, relative to the response over the window, that is noted as a possible weak mode: under it the
+     * misfit is within the accuracy a calibrated chain is usually trusted to (common practice), and as small as the
+     * misfit a specimen's slight nonlinearity leaves at its largest motion.
+     */
+    static final double NOTED = 0.01;
 
     private FitCheck() {
     }
@@ -91,6 +97,50 @@ final class FitCheck {
      */
     static List<Place> places(Frf h, double[] variance, double lowHz, double highHz, List<Mode> modes,
                               ResidualTerms terms) {
+        return places(h, variance, lowHz, highHz, modes, terms, true);
+    }
+
+    /**
+     * Where the residual stands above the noise and the misfit is between {@value #NOTED} and {@value #MATERIAL} of the
+     * response: not enough
+     * to call the data unexplained, but a weak mode the fit did not take (one whose peak is a few per cent of the
+     * response, a harmonic near a node of the force or the sensor) or a slight nonlinearity of the specimen, and worth
+     * saying, since such a mode is then missing from the modes.
+     *
+     * @param h the measured receptance
+     * @param variance the noise variance of each line
+     * @param lowHz lower edge of the fitted band, Hz
+     * @param highHz upper edge, Hz
+     * @param modes the model's modes
+     * @param terms the model's residual terms
+     * @param noiseEstimated true when the noise was estimated from the data rather than given with the FRF
+     * @return one plain sentence, or empty
+     */
+    static Optional<String> smallMisfit(Frf h, double[] variance, double lowHz, double highHz, List<Mode> modes,
+                                        ResidualTerms terms, boolean noiseEstimated) {
+        List<Place> places = places(h, variance, lowHz, highHz, modes, terms, false);
+        if (places.isEmpty()) {
+            return Optional.empty();
+        }
+        Place worst = places.get(0);
+        for (Place p : places) {
+            if (p.sigmas() > worst.sigmas()) {
+                worst = p;
+            }
+        }
+        StringBuilder where = new StringBuilder();
+        for (Place p : places) {
+            where.append(where.length() == 0 ? "" : ", ").append(String.format(Locale.ROOT, "%.4g Hz", p.worstHz()));
+        }
+        return Optional.of(String.format(Locale.ROOT, "the fitted modes leave a small misfit that stands above the %s"
+                + " noise near %s (at most %.1f %% of the response, %.0f times the noise): a weak mode that the fit did"
+                + " not take (one whose peak is a few per cent of the response, as for a harmonic near a node of the"
+                + " force or the sensor) or a slight nonlinearity of the specimen; any such mode is missing from the"
+                + " modes", noiseEstimated ? "estimated" : "measured", where, 100 * worst.relative(), worst.sigmas()));
+    }
+
+    private static List<Place> places(Frf h, double[] variance, double lowHz, double highHz, List<Mode> modes,
+                                      ResidualTerms terms, boolean material) {
         FitResidual fit = FitResidual.of(h, variance, modes, terms);
         double[] e2 = fit.whitenedSquares();
         Complex[] r = fit.residual();
@@ -117,7 +167,7 @@ final class FitCheck {
                 response += h.magnitude(k) * h.magnitude(k);
             }
             double relative = Math.sqrt(misfit / response);
-            if (!(sum > ModalCandidate.THRESHOLD * scale) || relative < MATERIAL) {
+            if (!(sum > ModalCandidate.THRESHOLD * scale) || (relative >= MATERIAL) != material || relative < NOTED) {
                 continue;
             }
             double middle = h.frequencyHz(start + window / 2);

@@ -260,6 +260,7 @@ public final class ModalEstimator {
         }
         unexplained = FitCheck.unexplained(h, judged, low, high, model, residuals, estimatedNoise);
         unexplained.ifPresent(warnings::add);
+        FitCheck.smallMisfit(h, judged, low, high, model, residuals, estimatedNoise).ifPresent(warnings::add);
         List<FittedMode> kept = new ArrayList<>();
         List<Mode> outsideBand = new ArrayList<>(residuals.outsideBand());
         for (FittedMode m : modes) {
