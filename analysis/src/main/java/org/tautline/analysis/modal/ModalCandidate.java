@@ -171,7 +171,23 @@ final class ModalCandidate {
                 }
             }
         }
-        return localFit(h, current, kept, near, fresh, options);
+        double from = Double.POSITIVE_INFINITY;
+        double to = Double.NEGATIVE_INFINITY;
+        for (Pole p : fresh) {
+            double reachHz = LOCAL_REACH * 2 * p.dampingRatio() * p.frequencyHz();
+            from = Math.min(from, p.frequencyHz() - reachHz);
+            to = Math.max(to, p.frequencyHz() + reachHz);
+        }
+        for (int i : kept) {
+            if (near[i]) {
+                Mode m = modes.get(i).mode();
+                double reachHz = LOCAL_REACH * 2 * m.dampingRatio() * m.frequencyHz();
+                from = Math.min(from, m.frequencyHz() - reachHz);
+                to = Math.max(to, m.frequencyHz() + reachHz);
+            }
+        }
+        return localFit(h, current, kept, near, fresh, options,
+                new double[] {Math.max(from, options.lines().fromHz()), Math.min(to, options.lines().toHz())});
     }
 
     /**
@@ -189,6 +205,19 @@ final class ModalCandidate {
      */
     static ModalRefinementResult localFit(Frf h, ModalRefinementResult current, List<Integer> kept, boolean[] near,
                                           List<Pole> fresh, ModalRefinementOptions options) {
+        return localFit(h, current, kept, near, fresh, options, null);
+    }
+
+    /**
+     * As {@link #localFit(Frf, ModalRefinementResult, List, boolean[], List, ModalRefinementOptions)}, but, given a
+     * window, fitted on the window's lines only, with the residual terms and the poles beyond the band held as well:
+     * the modes fitted anew are then set by the lines around them, and the whole model's cost is what the caller judges.
+     *
+     * @param window the lowest and highest frequency fitted, Hz, or null for the whole band with the terms free
+     */
+    private static ModalRefinementResult localFit(Frf h, ModalRefinementResult current, List<Integer> kept,
+                                                  boolean[] near, List<Pole> fresh, ModalRefinementOptions options,
+                                                  double[] window) {
         List<FittedMode> modes = current.modes();
         List<Mode> held = new ArrayList<>();
         List<Pole> free = new ArrayList<>();
@@ -201,7 +230,8 @@ final class ModalCandidate {
             }
         }
         free.addAll(fresh);
-        org.hipparchus.complex.Complex[] left = FitResidual.of(h, new double[h.size()], held, ResidualTerms.NONE, true)
+        ResidualTerms heldTerms = window == null ? ResidualTerms.NONE : current.residualTerms();
+        org.hipparchus.complex.Complex[] left = FitResidual.of(h, new double[h.size()], held, heldTerms, true)
                 .residual();
         double[] re = new double[h.size()];
         double[] im = new double[h.size()];
@@ -210,11 +240,15 @@ final class ModalCandidate {
             im[k] = left[k].getImaginary();
         }
         Frf rest = Frf.of(h.frequenciesHz(), re, im, h.quantity());
+        ModalRefinementOptions fitOptions = window == null ? options
+                : ModalRefinementOptions.of(options.lines().withUpperResidual(false).withLowerResidual(false)
+                        .withOutsideBandPoles(List.of()).withBandHz(window[0], window[1]))
+                        .withMaxIterations(options.maxIterations());
         ModalRefinementResult fitted;
         try {
-            LsfdResult start = Lsfd.fit(rest, free, options.lines());
+            LsfdResult start = Lsfd.fit(rest, free, fitOptions.lines());
             fitted = ModalRefinement.refine(rest, start.modes(), start.residualTerms(),
-                    options.withMaxIterations(Math.min(options.maxIterations(), ITERATIONS)));
+                    fitOptions.withMaxIterations(Math.min(fitOptions.maxIterations(), ITERATIONS)));
         } catch (AnalysisException e) {
             return null;
         }
@@ -224,9 +258,12 @@ final class ModalCandidate {
             combined.add(near[i] ? fitted.modes().get(next++) : modes.get(i));
         }
         combined.addAll(fitted.modes().subList(next, fitted.modes().size()));
-        ModalRefinementResult whole = new ModalRefinementResult(combined, fitted.residualTerms(),
-                fitted.residualTermsStd(), fitted.iterations(), fitted.cost(), fitted.residualVariance(),
-                fitted.varianceKnown());
+        // A windowed fit's cost covers the window only; the whole model's is for the caller to compute (it is not kept).
+        ModalRefinementResult whole = window == null
+                ? new ModalRefinementResult(combined, fitted.residualTerms(), fitted.residualTermsStd(),
+                        fitted.iterations(), fitted.cost(), fitted.residualVariance(), fitted.varianceKnown())
+                : new ModalRefinementResult(combined, current.residualTerms(), current.residualTermsStd(),
+                        fitted.iterations(), Double.NaN, Double.NaN, fitted.varianceKnown());
         return checked(h, whole, fresh, options);
     }
 
