@@ -56,17 +56,46 @@ final class FitResidual {
      */
     static FitResidual of(Frf h, double[] variance, List<Mode> modes, ResidualTerms terms, boolean residualOnly) {
         int n = h.size();
+        List<Mode> all = new java.util.ArrayList<>(modes);
+        all.addAll(terms.outsideBand());
+        int count = all.size();
+        // Each mode's A/(w_n^2 - w^2 + 2 j zeta w_n w) in plain arithmetic (Mode.receptanceAt, without its objects).
+        double[] wn2 = new double[count];
+        double[] twoZetaWn = new double[count];
+        double[] aRe = new double[count];
+        double[] aIm = new double[count];
+        for (int r = 0; r < count; r++) {
+            Mode m = all.get(r);
+            double wn = m.angularFrequencyRadPerS();
+            wn2[r] = wn * wn;
+            twoZetaWn[r] = 2.0 * m.dampingRatio() * wn;
+            aRe[r] = m.modalConstant().getReal();
+            aIm[r] = m.modalConstant().getImaginary();
+        }
+        double upperRe = terms.upper().getReal();
+        double upperIm = terms.upper().getImaginary();
+        double lowerRe = terms.lower().getReal();
+        double lowerIm = terms.lower().getImaginary();
         Complex[] r = new Complex[n];
         double[] e2 = new double[n];
+        double[] re = h.realParts();
+        double[] im = h.imaginaryParts();
         for (int k = 0; k < n; k++) {
-            double f = h.frequencyHz(k);
-            Complex model = terms.receptanceAt(f);
-            for (Mode m : modes) {
-                model = model.add(m.receptanceAt(f));
+            double w = 2.0 * Math.PI * h.frequencyHz(k);
+            double w2 = w * w;
+            double modelRe = upperRe - lowerRe / w2;
+            double modelIm = upperIm - lowerIm / w2;
+            for (int q = 0; q < count; q++) {
+                double dr = wn2[q] - w2;
+                double di = twoZetaWn[q] * w;
+                double d2 = dr * dr + di * di;
+                modelRe += (aRe[q] * dr + aIm[q] * di) / d2;
+                modelIm += (aIm[q] * dr - aRe[q] * di) / d2;
             }
-            r[k] = h.value(k).subtract(model);
-            double norm = r[k].norm();
-            e2[k] = residualOnly ? 0 : norm * norm / variance[k];
+            double eRe = re[k] - modelRe;
+            double eIm = im[k] - modelIm;
+            r[k] = new Complex(eRe, eIm);
+            e2[k] = residualOnly ? 0 : (eRe * eRe + eIm * eIm) / variance[k];
         }
         return new FitResidual(r, e2);
     }

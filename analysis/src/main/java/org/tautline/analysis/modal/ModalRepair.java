@@ -344,11 +344,15 @@ final class ModalRepair {
         while (splitHz.size() < MAX_SPLITS) {
             int chosen = -1;
             List<FittedMode> modes = current.modes();
+            // The residual of the model now, once for all its modes.
+            FitResidual residual = FitResidual.of(h, variance, ModalFit.plain(current), current.residualTerms());
+            double level = ModalResidualSearch.THRESHOLD
+                    * Math.max(1, ModalCandidate.scale(h, variance, lowHz, highHz, current));
             for (int r = 0; r < modes.size(); r++) {
                 Mode m = modes.get(r).mode();
                 double f = m.frequencyHz();
                 double reach = SPLIT_REACH * 2 * m.dampingRatio() * f;
-                if (f >= lowHz && f <= highHz && !tried.get(r) && detected(h, variance, lowHz, highHz, current, f - reach, f + reach, true)) {
+                if (f >= lowHz && f <= highHz && !tried.get(r) && detected(h, residual, level, f - reach, f + reach)) {
                     chosen = r;
                     break;
                 }
@@ -405,10 +409,15 @@ final class ModalRepair {
                             double fromHz, double toHz, boolean scaled) {
         FitResidual residual = FitResidual.of(h, variance, fit.modes().stream().map(FittedMode::mode).toList(),
                 fit.residualTerms());
-        double[] e2 = residual.whitenedSquares();
-        Complex[] r = residual.residual();
         double level = ModalResidualSearch.THRESHOLD
                 * (scaled ? Math.max(1, ModalCandidate.scale(h, variance, lowHz, highHz, fit)) : 1);
+        return detected(h, residual, level, fromHz, toHz);
+    }
+
+    /** As above, for a residual already computed and a detection level already scaled. */
+    private static boolean detected(Frf h, FitResidual residual, double level, double fromHz, double toHz) {
+        double[] e2 = residual.whitenedSquares();
+        Complex[] r = residual.residual();
         int window = ModalResidualSearch.WINDOW;
         for (int start = 0; start + window <= h.size(); start++) {
             if (h.frequencyHz(start) < fromHz || h.frequencyHz(start + window - 1) > toHz) {
