@@ -26,6 +26,7 @@ final class EngineRun {
     private final List<CompletedStep> recorded;
     private final SweepEventListener listener;
     private final SweepJournal journal;
+    private final SweepControl control;
     private final StepExecutor executor;
     private final double fs;
     private final List<CompletedStep> steps = new ArrayList<>();
@@ -45,6 +46,7 @@ final class EngineRun {
         this.recorded = List.copyOf(recorded);
         this.listener = listener;
         this.journal = journal;
+        this.control = control;
         this.executor = new StepExecutor(rig, plan, quantity, control);
         this.fs = rig.acquisition().sampleRateHz();
         this.originS = rig.acquisition().rigTimeS();
@@ -172,6 +174,13 @@ final class EngineRun {
 
     /** Switches the output on at the step's frequency and ramps up to the pass's drive. */
     private void startOutput(double f) {
+        String stop = control.reason();
+        if (stop != null) {
+            // A stop asked for while the output is off (before the sweep, between passes, during an analysis between
+            // two sweeps) excites nothing: without this the drive would go on and ramp up before the first block's check.
+            throw new SweepStop(false, String.format(Locale.ROOT, "%s before the output was switched on at %.2f Hz",
+                    stop, f));
+        }
         Exciter exciter = rig.exciter();
         boolean resumedMidPass = !live && !pass.points.isEmpty();
         double startV = !pass.points.isEmpty() ? executor.driveV()
