@@ -194,6 +194,35 @@ public final class Frf {
     }
 
     /**
+     * The lines from lowHz to highHz (both included), with their coherence, quality and variance when present.
+     *
+     * @param lowHz lowest frequency kept, Hz
+     * @param highHz highest frequency kept, Hz
+     * @return a new FRF
+     * @throws AnalysisException when no line lies in the band
+     */
+    public Frf withinBand(double lowHz, double highHz) {
+        int from = 0;
+        while (from < size() && frequencyHz[from] < lowHz) {
+            from++;
+        }
+        int to = from;
+        while (to < size() && frequencyHz[to] <= highHz) {
+            to++;
+        }
+        if (to == from) {
+            throw new AnalysisException("the band " + lowHz + " to " + highHz + " Hz holds no line of " + this);
+        }
+        return new Frf(Arrays.copyOfRange(frequencyHz, from, to), Arrays.copyOfRange(real, from, to),
+                Arrays.copyOfRange(imag, from, to), part(coherence, from, to), part(quality, from, to),
+                part(variance, from, to), quantity);
+    }
+
+    private static double[] part(double[] values, int from, int to) {
+        return values == null ? null : Arrays.copyOfRange(values, from, to);
+    }
+
+    /**
      * Converts to another quantity: each time derivative multiplies by j w (variances by w^2).
      *
      * @param target the quantity wanted

@@ -290,7 +290,7 @@ public final class ModalEstimator {
         }
         List<Mode> plain = kept.stream().map(FittedMode::mode).toList();
         Optional<FitQuality> quality = plain.isEmpty() ? Optional.empty()
-                : Optional.of(FitQuality.of(bandOf(h, low, high), plain, residuals, 3.0));
+                : Optional.of(FitQuality.of(h.withinBand(low, high), plain, residuals, 3.0));
         return new ModalEstimate(kept, residuals, residualsStd, quality, chart, selection, low, high, warnings,
                 unexplained);
     }
@@ -301,10 +301,10 @@ public final class ModalEstimator {
      * {@link ModeSelection#EDGE_GUARD} of an edge and implausible damping left out.
      */
     private static List<Pole> peaksOf(Frf h, double low, double high) {
-        Frf band = bandOf(h, low, high);
-        if (band.size() < PeakPicking.MINIMUM_LINES) {
+        if (linesIn(h, low, high) < PeakPicking.MINIMUM_LINES) {
             return List.of();
         }
+        Frf band = h.withinBand(low, high);
         double guard = ModeSelection.EDGE_GUARD * (high - low);
         List<Pole> out = new ArrayList<>();
         List<PeakEstimate> found;
@@ -417,22 +417,4 @@ public final class ModalEstimator {
         return n;
     }
 
-    private static Frf bandOf(Frf h, double low, double high) {
-        List<Integer> keep = new ArrayList<>();
-        for (int i = 0; i < h.size(); i++) {
-            if (h.frequencyHz(i) >= low && h.frequencyHz(i) <= high) {
-                keep.add(i);
-            }
-        }
-        double[] f = new double[keep.size()];
-        double[] re = new double[keep.size()];
-        double[] im = new double[keep.size()];
-        for (int k = 0; k < keep.size(); k++) {
-            int i = keep.get(k);
-            f[k] = h.frequencyHz(i);
-            re[k] = h.value(i).getReal();
-            im[k] = h.value(i).getImaginary();
-        }
-        return Frf.of(f, re, im, h.quantity());
-    }
 }

@@ -233,27 +233,14 @@ public record RecordedFit(ModalEstimate modal, List<String> recordCautions, Stri
         if (modes.isEmpty()) {
             return List.of();
         }
-        Frf h = frf.toQuantity(FrfQuantity.RECEPTANCE);
-        List<Integer> keep = new ArrayList<>();
-        for (int i = 0; i < h.size(); i++) {
-            if (h.frequencyHz(i) >= low && h.frequencyHz(i) <= high) {
-                keep.add(i);
-            }
-        }
-        double[] f = new double[keep.size()];
-        double[] re = new double[keep.size()];
-        double[] im = new double[keep.size()];
-        for (int k = 0; k < f.length; k++) {
-            int i = keep.get(k);
-            f[k] = h.frequencyHz(i);
-            re[k] = h.value(i).getReal();
-            im[k] = h.value(i).getImaginary();
-        }
-        if (f.length == 0) {
+        Frf band;
+        try {
+            band = frf.toQuantity(FrfQuantity.RECEPTANCE).withinBand(low, high);
+        } catch (AnalysisException e) {
             throw new AnalysisException(RunDirectory.RESULT + ": the fitted band " + low + " to " + high + " Hz holds no"
-                    + " line of " + RunDirectory.FRF + "; expected the band the FRF was fitted in");
+                    + " line of " + RunDirectory.FRF + "; expected the band the FRF was fitted in", e);
         }
-        return FitQuality.of(Frf.of(f, re, im, FrfQuantity.RECEPTANCE),
+        return FitQuality.of(band,
                 modes.stream().map(FittedMode::mode).toList(), terms, QUALITY_BANDS).bands();
     }
 }
