@@ -1,11 +1,20 @@
 package org.tautline.app.qualify;
 
 import java.util.List;
+import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
+import java.util.TreeMap;
+import java.util.function.Consumer;
 
+import org.tautline.analysis.AnalysisException;
+import org.tautline.analysis.frf.Frf;
 import org.tautline.analysis.modal.FittedMode;
 import org.tautline.analysis.modal.ModalEstimate;
 import org.tautline.analysis.modal.ModalEstimator;
+import org.tautline.analysis.modal.ModeSelection;
+import org.tautline.analysis.modal.Pole;
+import org.tautline.analysis.modal.StabilisationChart;
 import org.tautline.analysis.qualify.QualifiedMode;
 import org.tautline.analysis.qualify.Qualifier;
 import org.tautline.analysis.specimen.LevelledMode;
@@ -13,6 +22,7 @@ import org.tautline.analysis.specimen.LinearityCheck;
 import org.tautline.analysis.specimen.LinearityResult;
 import org.tautline.analysis.specimen.Specimen;
 import org.tautline.driver.spi.Rig;
+import org.tautline.driver.sweep.LevelMode;
 import org.tautline.driver.sweep.SweepControl;
 import org.tautline.driver.sweep.SweepEngine;
 import org.tautline.driver.sweep.SweepEventListener;
@@ -62,6 +72,19 @@ public final class LevelCheck {
     }
 
     /**
+     * The level check's figure, or why there is none.
+     *
+     * @param result the comparison of the two levels; empty when the check was not run or gave no figure
+     * @param whyNone why there is none, one plain sentence for the report and the limit on the shift; empty with a
+     *        figure
+     */
+    public record Outcome(Optional<LinearityResult> result, String whyNone) {
+        static Outcome none(String why) {
+            return new Outcome(Optional.empty(), why);
+        }
+    }
+
+    /**
      * Runs the level check's sweep on a connected rig and compares harmonic 1.
      *
      * @param rig the rig (the same as the main run's)
@@ -74,36 +97,161 @@ public final class LevelCheck {
      */
     public static Optional<LinearityResult> run(Rig rig, QualificationResult result, SweepPlan main,
                                                 SweepEventListener listener, SweepControl control) {
-        Optional<QualifiedMode> f1 = Qualifier.dominant(result.modes(), 1);
-        if (f1.isEmpty() || result.tension().isEmpty()) {
-            return Optional.empty();
-        }
-        double f = f1.get().mode().frequencyHz();
-        SweepPlan plan = plan(main, f, rig.exciter().maxAmplitudeV());
-        if (plan.levels().get(1) < MIN_LEVEL_RATIO * plan.levels().get(0)) {
-            // The drive limit leaves no room for a second level far enough above the first to show a shift.
-            return Optional.empty();
-        }
-        SweepResult sweep = new SweepEngine(rig).run(plan, listener, control, SweepJournal.NONE);
-        if (!sweep.completed()) {
-            return Optional.empty();
-        }
-        Optional<LevelledMode> low = level(result.specimen(), f, sweep.passes().get(0));
-        Optional<LevelledMode> high = level(result.specimen(), f, sweep.passes().get(1));
-        if (low.isEmpty() || high.isEmpty()) {
-            return Optional.empty();
-        }
-        return Optional.of(new LinearityCheck().compare(result.specimen(), result.tension().get().tensionN(),
-                List.of(low.get()), List.of(high.get())));
+        return attempt(rig, result, main, listener, control, notice -> { }).result();
     }
 
-    private static Optional<LevelledMode> level(Specimen specimen, double f1Hz, SweepPass pass) {
-        ModalEstimate estimate = ModalEstimator.defaults().estimate(pass.toFrf());
+    /**
+     * Runs the level check's sweep on a connected rig and compares harmonic 1, saying why when there is no figure.
+     * Nothing is excited when a stop was asked for, when the main plan holds the force (the check steps the drive) or
+     * when the drive limit leaves no room for the second level.
+     *
+     * @param rig the rig (the same as the main run's)
+     * @param result the main qualification, which gives f1 and the tension
+     * @param main the main plan
+     * @param listener progress of the sweep
+     * @param control stop requests
+     * @param notices told, in words, just before the rig is excited again
+     * @return the comparison, or why there is none
+     */
+    public static Outcome attempt(Rig rig, QualificationResult result, SweepPlan main, SweepEventListener listener,
+                                  SweepControl control, Consumer<String> notices) {
+        Optional<QualifiedMode> f1 = Qualifier.dominant(result.modes(), 1);
+        Optional<String> missing = missingInputs(f1, result);
+        if (missing.isPresent()) {
+            return Outcome.none(missing.get());
+        }
+        if (main.levelMode() == LevelMode.FORCE) {
+            return Outcome.none("the sweep held the force at a set level and the level check steps the drive voltage,"
+                    + " so it was not run; a plan with a second force level gives it from its own passes");
+        }
+        double f = f1.get().mode().frequencyHz();
+        double exciterV = rig.exciter().maxAmplitudeV();
+        SweepPlan plan = plan(main, f, exciterV);
+        double lowV = plan.levels().get(0);
+        if (plan.levels().get(1) < MIN_LEVEL_RATIO * lowV) {
+            // The drive limit leaves no room for a second level far enough above the first to show a shift.
+            boolean exciterBinds = exciterV < main.limits().driveV();
+            return Outcome.none(String.format(Locale.ROOT, "the %s (%s V) leaves no room for a second drive level at"
+                    + " least %s times the sweep's %s V, so the level check was not run; a drive limit of %s V or more"
+                    + " allows it", exciterBinds ? "exciter's limit" : "drive limit", number(Math.min(exciterV,
+                    main.limits().driveV())), number(MIN_LEVEL_RATIO), number(lowV), number(MIN_LEVEL_RATIO * lowV)));
+        }
+        if (control.stopRequested()) {
+            return Outcome.none("a stop was asked for (" + control.reason() + ") before the level check, so it was not"
+                    + " run");
+        }
+        notices.accept(String.format(Locale.ROOT, "level check: sweeping the fundamental (%s Hz, +/- 2 %%) again at %s V"
+                + " and %s V", number(f), number(lowV), number(plan.levels().get(1))));
+        SweepResult sweep = new SweepEngine(rig).run(plan, listener, control, SweepJournal.NONE);
+        if (!sweep.completed()) {
+            return Outcome.none("the level check's sweep " + sweep.status().label() + " (" + sweep.reason() + ")");
+        }
+        return compare(result, f, sweep.passes().get(0), sweep.passes().get(1), "V");
+    }
+
+    /**
+     * The level check from the sweep's own passes, for a plan with two or more levels: harmonic 1 in the first pass at
+     * the lowest level against the first at the highest, in the plan's first direction. Nothing is excited.
+     *
+     * @param result the main qualification (of the sweep's first pass), which gives f1 and the tension
+     * @param sweep the completed sweep
+     * @return the comparison, or why there is none
+     */
+    public static Outcome fromPasses(QualificationResult result, SweepResult sweep) {
+        Optional<QualifiedMode> f1 = Qualifier.dominant(result.modes(), 1);
+        Optional<String> missing = missingInputs(f1, result);
+        if (missing.isPresent()) {
+            return Outcome.none(missing.get());
+        }
+        SweepPlan plan = sweep.plan();
+        SweepPass low = null;
+        SweepPass high = null;
+        for (SweepPass pass : sweep.passes()) {
+            if (pass.direction() != plan.passDirection(0)) {
+                continue;
+            }
+            if (low == null || pass.level() < low.level()) {
+                low = pass;
+            }
+            if (high == null || pass.level() > high.level()) {
+                high = pass;
+            }
+        }
+        String unit = plan.levelMode() == LevelMode.FORCE ? "N" : "V";
+        if (low == null || high.level() < MIN_LEVEL_RATIO * low.level()) {
+            return Outcome.none(String.format(Locale.ROOT, "the sweep's levels (%s) are not %s times apart or more, too"
+                    + " close for the level check", String.join(", ", plan.levels().stream().map(l -> number(l) + " "
+                    + unit).toList()), number(MIN_LEVEL_RATIO)));
+        }
+        return compare(result, f1.get().mode().frequencyHz(), low, high, unit);
+    }
+
+    private static Optional<String> missingInputs(Optional<QualifiedMode> f1, QualificationResult result) {
+        if (f1.isEmpty()) {
+            return Optional.of("harmonic 1 was not found in the sweep, so there was no fundamental to compare at two"
+                    + " levels");
+        }
+        if (result.tension().isEmpty()) {
+            return Optional.of("the tension could not be read from the sweep, and the level check needs it to predict"
+                    + " the shift of f1");
+        }
+        return Optional.empty();
+    }
+
+    private static Outcome compare(QualificationResult result, double f1Hz, SweepPass lowPass, SweepPass highPass,
+                                   String unit) {
+        Reading low = level(result, f1Hz, lowPass, unit);
+        if (low.mode().isEmpty()) {
+            return Outcome.none(low.whyNone());
+        }
+        Reading high = level(result, f1Hz, highPass, unit);
+        if (high.mode().isEmpty()) {
+            return Outcome.none(high.whyNone());
+        }
+        return new Outcome(Optional.of(new LinearityCheck().compare(result.specimen(),
+                result.tension().get().tensionN(), List.of(low.mode().get()), List.of(high.mode().get()))), "");
+    }
+
+    /** Harmonic 1 at one level, or why it could not be read. */
+    private record Reading(Optional<LevelledMode> mode, String whyNone) {
+    }
+
+    /** A figure for a sentence: at most four significant digits, no trailing zeros. */
+    private static String number(double v) {
+        return new java.math.BigDecimal(v).round(new java.math.MathContext(4)).stripTrailingZeros().toPlainString();
+    }
+
+    /**
+     * Harmonic 1 at one level. The pass's FRF is fitted from the main fit's modes in the pass's band as starting poles
+     * (refined jointly with the modal constants, {@link ModalEstimator#refit}): the fundamental's doublet is then
+     * resolved as the main fit resolved it, where a fit from scratch of the narrow band may merge its two polarisations
+     * into one mode at a frequency neither has. A fit that leaves the response unexplained gives no figure.
+     */
+    private static Reading level(QualificationResult main, double f1Hz, SweepPass pass, String unit) {
+        String at = "the level check's sweep at " + number(pass.level()) + " " + unit;
+        Frf frf = pass.toFrf();
+        double lowHz = frf.frequencyHz(0);
+        double highHz = frf.frequencyHz(frf.size() - 1);
+        List<Pole> seeds = main.modal().modes().stream().map(FittedMode::mode)
+                .filter(m -> m.frequencyHz() >= lowHz && m.frequencyHz() <= highHz)
+                .map(m -> Pole.of(m.frequencyHz(), m.dampingRatio())).toList();
+        ModalEstimate estimate;
+        try {
+            estimate = ModalEstimator.defaults().refit(frf, ModeSelection.of(seeds), StabilisationChart.classify(lowHz,
+                    highHz, new TreeMap<>(Map.of(Math.max(1, 2 * seeds.size()), seeds)), null));
+        } catch (AnalysisException e) {
+            return new Reading(Optional.empty(), at + " could not be fitted (" + e.getMessage() + ")");
+        }
+        if (estimate.unexplained().isPresent()) {
+            return new Reading(Optional.empty(), at + " was not explained by its fit, so f1 is not known well enough"
+                    + " there to compare the levels: " + estimate.unexplained().get());
+        }
         Optional<FittedMode> strongest = estimate.modes().stream()
                 .filter(m -> Math.abs(m.mode().frequencyHz() / f1Hz - 1) < 0.005)
                 .max((a, b) -> Double.compare(a.mode().modalConstant().norm(), b.mode().modalConstant().norm()));
         if (strongest.isEmpty()) {
-            return Optional.empty();
+            return new Reading(Optional.empty(), String.format(Locale.ROOT, "harmonic 1 was not found within 0.5 %% of"
+                    + " %s Hz in %s, so the two levels could not be compared", number(f1Hz), at));
         }
         double fn = strongest.get().mode().frequencyHz();
         SweepPoint nearest = pass.points().get(0);
@@ -112,7 +260,9 @@ public final class LevelCheck {
                 nearest = p;
             }
         }
+        Specimen specimen = main.specimen();
         double shapeAtSensor = Math.abs(Math.sin(Math.PI * specimen.sensorPositionM() / specimen.lengthM()));
-        return Optional.of(new LevelledMode(1, strongest.get(), nearest.responseAmplitude() / shapeAtSensor));
+        return new Reading(Optional.of(new LevelledMode(1, strongest.get(), nearest.responseAmplitude() / shapeAtSensor)),
+                "");
     }
 }

@@ -136,6 +136,24 @@ public final class Qualification {
     }
 
     /**
+     * Says why a result has no level check: the limit on the shift of f1, if any, is judged "not measured" with that
+     * reason, and the result file records it. The modes are numbered and judged again from the same fit (not fitted
+     * again).
+     *
+     * @param result the qualification, without a level check
+     * @param why why there is none, one plain sentence
+     * @param specification the limits, if any
+     * @return the result saying why it has no level check
+     */
+    public static QualificationResult withoutLevelCheck(QualificationResult result, String why,
+                                                        Optional<Specification> specification) {
+        QualificationRequest request = result.assessment().request().withSpecification(specification)
+                .withoutLevelCheck(why);
+        return new QualificationResult(Qualifier.ofFit(request, result.assessment().modal()), result.sweep(),
+                result.wallTimeS());
+    }
+
+    /**
      * Adds cautions that come from outside the FRF (an instrument whose calibration had run out): the verdict, if
      * any, becomes not determinable with each caution as a reason, before the limits' own; the figures stay as they
      * are, for the record.
