@@ -24,11 +24,10 @@ import org.tautline.analysis.verdict.Specification;
 import org.tautline.app.qualify.Qualification;
 import org.tautline.app.qualify.QualificationResult;
 import org.tautline.app.qualify.ResultText;
-import org.tautline.app.qualify.SpecificationFile;
-import org.tautline.app.qualify.SpecimenFile;
 import org.tautline.app.report.LevelCheckFile;
 import org.tautline.app.report.RunDirectory;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
@@ -57,11 +56,8 @@ final class FitCommand implements Callable<Integer> {
     @Option(names = "--complex-modes", description = "Fit complex modal constants (non-proportional damping).")
     private boolean complexModes;
 
-    @Option(names = "--specimen", paramLabel = "S.json", description = "The specimen description (see the README).")
-    private Path specimenFile;
-
-    @Option(names = "--spec", paramLabel = "SPEC.json", description = "The specification to judge against (needs --specimen).")
-    private Path specificationFile;
+    @Mixin
+    private FitInputs stated;
 
     @Option(names = "--level-check", paramLabel = "RESULT.json",
             description = "The run's result.json holding the level check (default: result.json beside the FRF file,"
@@ -79,18 +75,15 @@ final class FitCommand implements Callable<Integer> {
             double[] limits = parseBand(band);
             estimator = estimator.withBand(limits[0], limits[1]);
         }
-        if (specificationFile != null && specimenFile == null) {
-            throw new AnalysisException("--spec needs --specimen: the limits judge the specimen's properties");
-        }
+        Optional<FitInputs.Stated> given = stated.read();
         PrintWriter out = spec.commandLine().getOut();
-        if (specimenFile == null) {
+        if (given.isEmpty()) {
             ModalEstimate estimate = estimator.estimate(frf);
             out.print(json ? ResultJson.MAPPER.writeValueAsString(modalJson(estimate)) + "\n"
                     : modalText(estimate, QuantityFormat.forStandardOutput()));
         } else {
-            Specimen specimen = SpecimenFile.read(specimenFile);
-            Optional<Specification> specification = specificationFile == null ? Optional.empty()
-                    : Optional.of(SpecificationFile.read(specificationFile));
+            Specimen specimen = given.get().specimen();
+            Optional<Specification> specification = given.get().specification();
             QualificationResult result = Qualification.analyse(specimen, frf, Optional.empty(), estimator, specification,
                     System.nanoTime());
             Path recorded = levelCheckFile != null ? levelCheckFile

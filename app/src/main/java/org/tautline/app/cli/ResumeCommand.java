@@ -8,6 +8,7 @@ import java.time.Clock;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 
 import org.tautline.app.SafetyNotice;
@@ -27,11 +28,14 @@ import picocli.CommandLine.Spec;
 @Command(name = "resume", mixinStandardHelpOptions = true,
         description = "Continue an interrupted sweep: reopen the rig recorded in RUNDIR/journal (checking that it is the"
                 + " same rig), take over the completed steps, run the rest under the same plan and limits, append them to"
-                + " the journal and write RUNDIR/frf.csv.",
+                + " the journal and write RUNDIR/frf.csv. When the folder records the specimen (RUNDIR/specimen.json,"
+                + " written by 'sweep --specimen') or --specimen gives it, the completed sweep is fitted and judged as"
+                + " 'sweep' does: the level check on the rig, RUNDIR/result.json and the verdict.",
         exitCodeListHeading = "%nExit status:%n",
-        exitCodeList = {"0:the sweep ran to its end", "1:an error; nothing was excited",
+        exitCodeList = {"0:the sweep ran to its end (and, with a specification, PASS)", "1:an error; nothing was excited",
                 "3:the sweep was stopped again", "4:a safety limit stopped the sweep",
-                "5:a rig or link fault stopped the sweep", "130/143:interrupted by Ctrl-C / kill, output off"})
+                "5:a rig or link fault stopped the sweep", "10:FAIL", "11:not determinable (also when the FRF could"
+                + " not be fitted)", "130/143:interrupted by Ctrl-C / kill, output off"})
 final class ResumeCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
@@ -56,6 +60,9 @@ final class ResumeCommand implements Callable<Integer> {
     @Mixin
     private PluginFolders plugins;
 
+    @Mixin
+    private FitInputs fitInputs;
+
     @Override
     public Integer call() throws IOException {
         PrintWriter err = spec.commandLine().getErr();
@@ -70,14 +77,17 @@ final class ResumeCommand implements Callable<Integer> {
         }
         RigDrivers drivers = plugins.drivers(err);
         JournalContents contents = JournalReader.read(journal);
+        Optional<FitInputs.Stated> stated = Optional.empty();
         if (!contents.finished()) {
+            stated = StatedFiles.recordedOrGiven(runDir, fitInputs);
             err.print(SafetyNotice.asText("sim".equals(contents.header().driver())));
             err.flush();
         }
         try (SignalStop stop = new SignalStop()) {
+            SweepQualifying qualifying = new SweepQualifying(stated, stop.control(), err);
             SweepResult result = JournaledSweep.resume(drivers, journal, changes, notice -> err.println("tautline: "
-                    + notice), SweepCommand.progress(noProgress), stop.control(), Clock.systemUTC());
-            return SweepReport.finish(result, runDir, json, spec.commandLine().getOut(), err);
+                    + notice), SweepCommand.progress(noProgress), stop.control(), Clock.systemUTC(), qualifying);
+            return SweepReport.finish(result, runDir, qualifying, json, spec.commandLine().getOut(), err);
         }
     }
 }

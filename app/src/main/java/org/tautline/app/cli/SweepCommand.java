@@ -3,6 +3,7 @@ package org.tautline.app.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
+import java.nio.file.LinkOption;
 import java.nio.file.Path;
 import java.time.Clock;
 import java.util.ArrayList;
@@ -13,6 +14,7 @@ import java.util.Optional;
 import java.util.concurrent.Callable;
 
 import org.tautline.app.SafetyNotice;
+import org.tautline.app.report.RunDirectory;
 import org.tautline.app.trace.RunSetup;
 import org.tautline.app.trace.SetupFile;
 import org.tautline.driver.journal.JournaledSweep;
@@ -31,11 +33,16 @@ import picocli.CommandLine.Spec;
 @Command(name = "sweep", mixinStandardHelpOptions = true,
         description = "Run a stepped-sine sweep on a rig, journaling every step to RUNDIR/journal and writing"
                 + " RUNDIR/frf.csv. The test date, and the rig file and the air when given, are recorded in"
-                + " RUNDIR/setup.json for the report. An interrupted run continues with 'tautline resume RUNDIR'.",
+                + " RUNDIR/setup.json for the report. With --specimen (and --spec) they are recorded as"
+                + " RUNDIR/specimen.json (and spec.json) before anything is excited, and a sweep that runs to its end"
+                + " is fitted and judged on its rig: the level check (the fundamental again at a second drive level,"
+                + " when --max-drive leaves room for one at 1.5 times --drive or more), then RUNDIR/result.json and"
+                + " the verdict. An interrupted run continues with 'tautline resume RUNDIR'.",
         exitCodeListHeading = "%nExit status:%n",
-        exitCodeList = {"0:the sweep ran to its end", "1:an error; nothing was excited",
+        exitCodeList = {"0:the sweep ran to its end (and, with --spec, PASS)", "1:an error; nothing was excited",
                 "3:the sweep was stopped; resume continues it", "4:a safety limit stopped the sweep",
-                "5:a rig or link fault stopped the sweep; resume continues it",
+                "5:a rig or link fault stopped the sweep; resume continues it", "10:FAIL (with --spec)",
+                "11:not determinable (with --specimen: also when the FRF could not be fitted)",
                 "130/143:interrupted by Ctrl-C / kill, after the output was switched off"})
 final class SweepCommand implements Callable<Integer> {
     /** Journal file name inside a run folder. */
@@ -106,7 +113,8 @@ final class SweepCommand implements Callable<Integer> {
     @Option(names = "--keep-samples", description = "Also keep every step's integration samples in RUNDIR/journal.samples.")
     private boolean keepSamples;
 
-    @Option(names = "--out", required = true, paramLabel = "RUNDIR", description = "Folder for the journal and frf.csv.")
+    @Option(names = "--out", required = true, paramLabel = "RUNDIR",
+            description = "Folder for the journal and frf.csv (and, with --specimen, specimen.json, spec.json and result.json).")
     private Path runDir;
 
     @Option(names = "--json", description = "Print a summary as JSON on standard output.")
@@ -120,6 +128,9 @@ final class SweepCommand implements Callable<Integer> {
 
     @Mixin
     private SetupOptions setup;
+
+    @Mixin
+    private FitInputs fitInputs;
 
     @Override
     public Integer call() throws IOException {
@@ -137,22 +148,32 @@ final class SweepCommand implements Callable<Integer> {
             throw new IllegalArgumentException(runDir + " already holds a journal; continue it with 'tautline resume "
                     + runDir + "' or choose another --out");
         }
-        if (Files.exists(runDir.resolve(SetupFile.NAME))) {
-            throw new IllegalArgumentException(runDir + " already holds a " + SetupFile.NAME + " from another run; choose"
-                    + " another --out");
+        for (String name : List.of(SetupFile.NAME, RunDirectory.FRF, RunDirectory.RESULT, RunDirectory.SPECIMEN,
+                RunDirectory.SPECIFICATION)) {
+            if (Files.exists(runDir.resolve(name), LinkOption.NOFOLLOW_LINKS)) {
+                throw new IllegalArgumentException(runDir + " already holds a " + name + " from another run; choose"
+                        + " another --out");
+            }
         }
+        Optional<FitInputs.Stated> stated = fitInputs.read();
         RunSetup recorded = setup.setup(Optional.of(Clock.systemUTC().instant()));
         Files.createDirectories(runDir);
         SetupFile.write(runDir, recorded);
+        if (stated.isPresent()) {
+            StatedFiles.write(runDir, stated.get());
+        }
         err.print(SafetyNotice.asText("sim".equals(driver)));
         err.flush();
         try (SignalStop stop = new SignalStop()) {
+            SweepQualifying qualifying = new SweepQualifying(stated, stop.control(), err);
             SweepResult result = JournaledSweep.run(drivers, driver, given, plan, journal, keepSamples,
-                    progress(noProgress), stop.control(), Clock.systemUTC());
-            return SweepReport.finish(result, runDir, json, spec.commandLine().getOut(), err);
+                    progress(noProgress), stop.control(), Clock.systemUTC(), qualifying);
+            return SweepReport.finish(result, runDir, qualifying, json, spec.commandLine().getOut(), err);
         } catch (RuntimeException e) {
             if (!Files.exists(journal)) {
-                Files.deleteIfExists(runDir.resolve(SetupFile.NAME)); // no run was made: the folder can be used again
+                // No run was made: the folder can be used again.
+                Files.deleteIfExists(runDir.resolve(SetupFile.NAME));
+                StatedFiles.remove(runDir);
             }
             throw e;
         }

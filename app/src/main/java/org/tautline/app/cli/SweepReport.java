@@ -25,19 +25,21 @@ final class SweepReport {
     }
 
     /**
-     * Writes the FRF of every pass of a complete sweep, prints the summary (JSON with {@code json}) and the warnings,
-     * and says how to go on when the sweep ended early.
+     * Writes the FRF of every pass of a complete sweep and, when it was qualified, its {@code result.json}; prints the
+     * summary (JSON with {@code json}), the warnings and the result or why there is none, and says how to go on when
+     * the sweep ended early.
      *
      * @param result the sweep
      * @param runDir the run folder
+     * @param qualifying the qualification of the completed sweep, if the specimen was stated
      * @param json true for JSON on standard output
      * @param out standard output
      * @param err standard error
-     * @return the exit status ({@link ExitCodes})
+     * @return the exit status ({@link ExitCodes}): the verdict's when the sweep was qualified
      * @throws IOException when a file cannot be written
      */
-    static int finish(SweepResult result, Path runDir, boolean json, PrintWriter out, PrintWriter err)
-            throws IOException {
+    static int finish(SweepResult result, Path runDir, SweepQualifying qualifying, boolean json, PrintWriter out,
+                      PrintWriter err) throws IOException {
         Path journal = runDir.resolve(SweepCommand.JOURNAL);
         JournalHeader header = JournalReader.read(journal).header();
         Map<Integer, Path> frfFiles = new LinkedHashMap<>();
@@ -55,23 +57,27 @@ final class SweepReport {
                 FrfCsvWriter.write(pass.toFrf(), metadata, file);
                 frfFiles.put(pass.index(), file);
             }
+            qualifying.writeResult(runDir);
         }
         for (String warning : result.warnings()) {
             err.println("warning: " + warning);
         }
         if (json) {
-            out.println(ResultJson.MAPPER.writeValueAsString(json(result, header, journal, frfFiles)));
+            ObjectNode summary = json(result, header, journal, frfFiles);
+            qualifying.addTo(summary, result, runDir);
+            out.println(ResultJson.MAPPER.writeValueAsString(summary));
         } else {
             out.println(text(result, runDir, journal, frfFiles, QuantityFormat.forStandardOutput()));
+            out.print(qualifying.text(result, runDir));
         }
         out.flush();
         err.flush();
-        return switch (result.status()) {
+        return qualifying.exitCode(result, switch (result.status()) {
             case COMPLETED -> ExitCodes.OK;
             case CANCELLED -> ExitCodes.SWEEP_STOPPED;
             case LIMIT -> ExitCodes.SWEEP_LIMIT;
             case FAULT -> ExitCodes.SWEEP_FAULT;
-        };
+        });
     }
 
     private static String level(SweepResult result, SweepPass pass) {
