@@ -107,7 +107,7 @@ final class SweepQualifying implements JournaledSweep.AfterCompletion {
                     + RunDirectory.SPECIMEN + " in the folder) will fit it later, without a level check.");
         }
         return Optional.of("No verdict: the sweep is complete, but its FRF could not be fitted (" + failure + "); "
-                + RunDirectory.FRF + " and the journal are kept, and 'tautline report " + runDir + "' fits it again.");
+                + RunDirectory.FRF + " and the journal are kept.");
     }
 
     /**
