@@ -186,9 +186,18 @@ final class ModalCandidate {
                 to = Math.max(to, m.frequencyHz() + reachHz);
             }
         }
-        return localFit(h, current, kept, near, fresh, options,
-                new double[] {Math.max(from, options.lines().fromHz()), Math.min(to, options.lines().toHz())});
+        double bandFrom = Math.max(options.lines().fromHz(), h.frequencyHz(0));
+        double bandTo = Math.min(options.lines().toHz(), h.frequencyHz(h.size() - 1));
+        from = Math.max(from, bandFrom);
+        to = Math.min(to, bandTo);
+        // Where the reach covers most of the band (a narrow band, a few modes), the residual terms and the poles
+        // beyond the band are as much the candidate's business as the modes near it: they are fitted with it.
+        boolean narrow = to - from > LOCAL_WINDOW_SHARE * (bandTo - bandFrom);
+        return localFit(h, current, kept, near, fresh, options, narrow ? null : new double[] {from, to});
     }
+
+    /** Share of the band's width above which a candidate's local fit takes the whole band, terms and all. */
+    static final double LOCAL_WINDOW_SHARE = 0.5;
 
     /**
      * The whole model with only some of its modes fitted anew, with new poles, the residual terms and the coefficients
