@@ -247,6 +247,20 @@ class SweepQualifyTest {
     }
 
     @Test
+    void aCompletedSweepWhoseFrfCannotBeFittedIsNotDeterminable() throws Exception {
+        Path[] stated = statedFiles();
+        Path run = dir.resolve("run");
+        List<String> args = sweep("sim", dir, run, "--specimen", stated[0].toString());
+        args.set(args.indexOf("40"), "6"); // six lines: fewer than a modal fit needs
+        CliRun r = CliRun.of(args.toArray(String[]::new));
+        assertEquals(ExitCodes.VERDICT_NOT_DETERMINABLE, r.exitCode(), r.err());
+        assertTrue(r.out().contains("\nNo verdict: the sweep is complete, but its FRF could not be fitted ("), r.out());
+        assertTrue(r.out().endsWith("); frf.csv and the journal are kept.\n"), r.out());
+        assertTrue(Files.isRegularFile(run.resolve("frf.csv")));
+        assertFalse(Files.exists(run.resolve("result.json")), "no result is recorded");
+    }
+
+    @Test
     void withoutASpecimenTheSweepSaysTheFrfIsFittedLaterAndASpecAloneIsRefused() throws Exception {
         Path run = dir.resolve("run");
         CliRun r = CliRun.of(sweep("sim", dir, run).toArray(String[]::new));
