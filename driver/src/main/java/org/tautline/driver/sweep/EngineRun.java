@@ -189,6 +189,15 @@ final class EngineRun {
         exciter.setOutputEnabled(true);
         outputOn = true;
         executor.assumeDriveV(0.0);
+        String late = control.reason();
+        if (late != null) {
+            // A stop that came while the output was being switched on: the amplitude is still zero, so off at once
+            // rather than after a ramp up and a block.
+            exciter.setOutputEnabled(false);
+            outputOn = false;
+            throw new SweepStop(false, String.format(Locale.ROOT, "%s as the output was switched on at %.2f Hz, before"
+                    + " any drive", late, f));
+        }
         executor.rampDrive(startV, plan.rampS());
         if (!live) {
             live = true;

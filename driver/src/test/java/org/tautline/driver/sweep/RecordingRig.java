@@ -45,6 +45,8 @@ public final class RecordingRig implements Rig {
     public int readsBeforeCancel = Integer.MAX_VALUE;
     /** Blocks read before a read throws a link fault. */
     public int readsBeforeLinkFault = Integer.MAX_VALUE;
+    /** Stop reason {@link #control} is given the moment the output is switched on, or null for none. */
+    public String stopWhenSwitchedOn;
     private final Rig inner;
     private double frequencyHz;
 
@@ -78,6 +80,9 @@ public final class RecordingRig implements Rig {
             public void setOutputEnabled(boolean on) {
                 commands.add(new Command(on ? "on" : "off", 0, 0, inner.acquisition().nextSampleIndex()));
                 super.setOutputEnabled(on);
+                if (on && stopWhenSwitchedOn != null) {
+                    control.requestStop(stopWhenSwitchedOn);
+                }
             }
         };
     }

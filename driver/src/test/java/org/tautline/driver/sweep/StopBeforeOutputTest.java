@@ -59,4 +59,21 @@ class StopBeforeOutputTest {
         assertEquals(10, rig.blockPeaks.size(), "two reads per step of the first pass, none after");
         assertFalse(rig.exciter().isOutputEnabled());
     }
+
+    @Test
+    void aStopThatComesAsTheOutputGoesOnSwitchesItOffBeforeAnyDrive() {
+        // The stop lands between the engine's check and the switching on: the output is on at zero amplitude.
+        RecordingRig rig = new RecordingRig(new SimulatedRig(SweepFixtures.singlePolarisationWire()));
+        rig.stopWhenSwitchedOn = "stopped as the output went on";
+        SweepResult result = new SweepEngine(rig).run(twoLevels(), SweepEventListener.NONE, rig.control,
+                new RecordingJournal());
+
+        assertEquals(SweepStatus.CANCELLED, result.status());
+        assertTrue(result.reason().startsWith("stopped as the output went on as the output was switched on"),
+                result.reason());
+        assertTrue(rig.blockPeaks.isEmpty(), "no block was read");
+        assertFalse(rig.commands.stream().anyMatch(c -> c.kind().equals("ramp") && c.amplitudeV() > 0),
+                "no drive was ramped up: " + rig.commands);
+        assertFalse(rig.exciter().isOutputEnabled());
+    }
 }
