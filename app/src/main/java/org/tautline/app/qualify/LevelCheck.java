@@ -21,6 +21,7 @@ import org.tautline.analysis.specimen.LevelledMode;
 import org.tautline.analysis.specimen.LinearityCheck;
 import org.tautline.analysis.specimen.LinearityResult;
 import org.tautline.analysis.specimen.Specimen;
+import org.tautline.driver.RigException;
 import org.tautline.driver.spi.Rig;
 import org.tautline.driver.sweep.LevelMode;
 import org.tautline.driver.sweep.SweepControl;
@@ -61,8 +62,13 @@ public final class LevelCheck {
      * @param f1Hz the fundamental, Hz
      * @param maxDriveV the rig's drive limit, V
      * @return the plan
+     * @throws RigException for a force-controlled plan
      */
     public static SweepPlan plan(SweepPlan main, double f1Hz, double maxDriveV) {
+        if (main.levelMode() == LevelMode.FORCE) {
+            throw new RigException("the level check sweeps the fundamental at two drive levels in"
+                    + " volts; a force-controlled plan's levels are forces, so it has no level check of this kind");
+        }
         double driveV = main.levels().get(0);
         double highV = Math.min(Math.min(LEVEL_RATIO * driveV, maxDriveV), main.limits().driveV());
         return new SweepPlan(f1Hz * (1 - HALF_BAND), f1Hz * (1 + HALF_BAND), STEPS, main.settle(),

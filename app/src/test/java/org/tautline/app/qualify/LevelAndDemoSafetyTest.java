@@ -61,4 +61,16 @@ class LevelAndDemoSafetyTest {
             assertEquals(List.of(1.0, 3.0), levels, "the second pass drives three times harder");
         }
     }
+
+    @Test
+    void aForceControlledPlanHasNoLevelCheckOfTwoDriveLevels() {
+        SweepPlan main = plan(new SafetyLimits(5.0, 10.0, 0.01, 0.01));
+        SweepPlan force = new SweepPlan(main.startHz(), main.stopHz(), main.coarseStepCount(), main.settle(),
+                main.integrationCycles(), org.tautline.driver.sweep.LevelMode.FORCE, List.of(0.5), main.limits(),
+                main.direction(), main.refinement(), main.initialDampingRatio(), main.levelTolerance(),
+                main.initialDriveV(), main.driveRateVPerS(), main.rampS(), main.harmonicOrder());
+        org.tautline.driver.RigException e = assertThrows(org.tautline.driver.RigException.class,
+                () -> LevelCheck.plan(force, 226, 10));
+        assertTrue(e.getMessage().contains("force-controlled"), e.getMessage());
+    }
 }
