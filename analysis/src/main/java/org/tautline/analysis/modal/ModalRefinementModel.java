@@ -176,6 +176,7 @@ final class ModalRefinementModel {
         int n = w0.length;
         double[] re = new double[count];
         double[] im = new double[count];
+        ModeValues modes = modeValues(p);
         for (int k = 0; k < w.length; k++) {
             double wk = w[k];
             double sq = root[k];
@@ -183,10 +184,10 @@ final class ModalRefinementModel {
             double sumIm = 0;
             int c = 0;
             for (int r = 0; r < n; r++) {
-                double wn = w0[r] * p[c];
-                double zeta = zeta0[r] * Math.exp(p[c + 1]);
-                double ar = aScale[r] * p[c + 2];
-                double ai = realModes ? 0 : aScale[r] * p[c + 3];
+                double wn = modes.wn[r];
+                double zeta = modes.zeta[r];
+                double ar = modes.ar[r];
+                double ai = modes.ai[r];
                 double dr = wn * wn - wk * wk;
                 double di = 2 * zeta * wn * wk;
                 double d2 = dr * dr + di * di;
@@ -263,6 +264,26 @@ final class ModalRefinementModel {
     }
 
     /**
+     * Each mode's natural angular frequency, damping ratio and modal constant at the scaled parameters, worked out
+     * once for all lines.
+     */
+    private record ModeValues(double[] wn, double[] zeta, double[] ar, double[] ai) {
+    }
+
+    private ModeValues modeValues(double[] p) {
+        int n = w0.length;
+        ModeValues v = new ModeValues(new double[n], new double[n], new double[n], new double[n]);
+        for (int r = 0; r < n; r++) {
+            int c = index(r);
+            v.wn[r] = w0[r] * p[c];
+            v.zeta[r] = zeta0[r] * Math.exp(p[c + 1]);
+            v.ar[r] = aScale[r] * p[c + 2];
+            v.ai[r] = realModes ? 0 : aScale[r] * p[c + 3];
+        }
+        return v;
+    }
+
+    /**
      * The whitened stacked model values alone, without the Jacobian.
      *
      * @param p scaled parameters
@@ -271,23 +292,20 @@ final class ModalRefinementModel {
      */
     double[] values(double[] p, double[] values) {
         int n = w0.length;
+        ModeValues modes = modeValues(p);
         for (int k = 0; k < w.length; k++) {
             double wk = w[k];
             double re = 0;
             double im = 0;
-            int c = 0;
             for (int r = 0; r < n; r++) {
-                double wn = w0[r] * p[c];
-                double zeta = zeta0[r] * Math.exp(p[c + 1]);
-                double ar = aScale[r] * p[c + 2];
-                double ai = realModes ? 0 : aScale[r] * p[c + 3];
-                double dr = wn * wn - wk * wk;
-                double di = 2 * zeta * wn * wk;
+                // A/D with D = w_n^2 - w^2 + 2 j zeta w_n w: (A conj(D))/|D|^2.
+                double dr = modes.wn[r] * modes.wn[r] - wk * wk;
+                double di = 2 * modes.zeta[r] * modes.wn[r] * wk;
                 double d2 = dr * dr + di * di;
-                re += (ar * dr + ai * di) / d2;
-                im += (ai * dr - ar * di) / d2;
-                c += realModes ? 3 : 4;
+                re += (modes.ar[r] * dr + modes.ai[r] * di) / d2;
+                im += (modes.ai[r] * dr - modes.ar[r] * di) / d2;
             }
+            int c = n * (realModes ? 3 : 4);
             if (upper) {
                 re += upperScale * p[c];
                 im += upperScale * p[c + 1];
