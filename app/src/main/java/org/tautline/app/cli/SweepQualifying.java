@@ -58,7 +58,7 @@ final class SweepQualifying implements JournaledSweep.AfterCompletion {
                         err.flush();
                     }, System.nanoTime()));
         } catch (RuntimeException e) {
-            failure = e.getMessage() == null ? "an unexpected " + e.getClass().getSimpleName() : e.getMessage();
+            failure = e.getMessage() == null ? "an unexpected internal error that gave no description" : e.getMessage();
         }
     }
 

@@ -146,7 +146,7 @@ public final class SweepEngine {
     }
 
     static String message(RuntimeException e) {
-        return e.getMessage() == null ? "an unexpected " + e.getClass().getSimpleName() : e.getMessage();
+        return e.getMessage() == null ? "an unexpected internal error that gave no description" : e.getMessage();
     }
 
     /**
