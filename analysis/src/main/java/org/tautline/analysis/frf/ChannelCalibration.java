@@ -44,6 +44,18 @@ public record ChannelCalibration(String channel, double sensitivityVoltsPerUnit,
             return siUnit;
         }
 
+        /** @return the quantity in words, for messages: force, displacement, velocity, acceleration or voltage */
+        public String label() {
+            return switch (this) {
+                case FORCE -> "force";
+                case DISPLACEMENT -> "displacement";
+                case VELOCITY -> "velocity";
+                case ACCELERATION -> "acceleration";
+                case VOLTAGE -> "voltage";
+            };
+        }
+        }
+
         /**
          * The quantity of a name.
          *
@@ -88,7 +100,7 @@ public record ChannelCalibration(String channel, double sensitivityVoltsPerUnit,
         }
         if (unit == null || !unit.equals(quantity.siUnit())) {
             throw new AnalysisException(where + "unit " + (unit == null ? "is missing" : "'" + unit + "'")
-                    + " does not match " + quantity.name().toLowerCase(Locale.ROOT) + "; expected '" + quantity.siUnit()
+                    + " does not match " + quantity.label() + "; expected '" + quantity.siUnit()
                     + "' (sensitivities are volts per SI unit)");
         }
     }

@@ -55,7 +55,7 @@ final class Calibrations {
         }
         List<String> units = new ArrayList<>();
         for (Quantity q : Quantity.values()) {
-            units.add(q.siUnit() + " (" + q.name().toLowerCase(Locale.ROOT) + ")");
+            units.add(q.siUnit() + " (" + q.label() + ")");
         }
         throw new AnalysisException(where + ": unit '" + unit + "' is not one of " + String.join(", ", units));
     }

@@ -176,12 +176,12 @@ final class FrfCommand implements Callable<Integer> {
         if (forceCal.isPresent() && responseCal.isPresent()) {
             if (forceCal.get().quantity() != Quantity.FORCE) {
                 throw new AnalysisException("the force channel '" + source.channelNames().get(force) + "' is calibrated as "
-                        + forceCal.get().quantity().name().toLowerCase(Locale.ROOT) + "; expected force");
+                        + forceCal.get().quantity().label() + "; expected force");
             }
             FrfQuantity fromCalibration = frfQuantity(responseCal.get().quantity(), source.channelNames().get(response));
             if (quantityName != null && FrfQuantity.valueOf(quantityName.toUpperCase(Locale.ROOT)) != fromCalibration) {
                 throw new AnalysisException("--quantity " + quantityName + " contradicts the response calibration ("
-                        + responseCal.get().quantity().name().toLowerCase(Locale.ROOT) + ")");
+                        + responseCal.get().quantity().label() + ")");
             }
             return fromCalibration;
         }
@@ -206,7 +206,7 @@ final class FrfCommand implements Callable<Integer> {
                 return FrfQuantity.ACCELERANCE;
             default:
                 throw new AnalysisException("the response channel '" + name + "' is calibrated as "
-                        + response.name().toLowerCase(Locale.ROOT) + "; expected displacement, velocity or acceleration");
+                        + response.label() + "; expected displacement, velocity or acceleration");
         }
     }
 
@@ -251,7 +251,7 @@ final class FrfCommand implements Callable<Integer> {
             spec.commandLine().getOut().printf(Locale.ROOT,
                     "frf: %d lines %.4g..%.4g Hz from %d averages, mean coherence %.4f, %s in %s, written to %s%n",
                     frf.size(), frf.frequencyHz(0), frf.frequencyHz(frf.size() - 1), spectra.averageCount(),
-                    meanCoherence, frf.quantity().name().toLowerCase(Locale.ROOT), frf.quantity().siUnits(), out);
+                    meanCoherence, frf.quantity().label(), frf.quantity().siUnits(), out);
         }
         spec.commandLine().getOut().flush();
     }
