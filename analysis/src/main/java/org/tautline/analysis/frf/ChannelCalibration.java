@@ -54,7 +54,6 @@ public record ChannelCalibration(String channel, double sensitivityVoltsPerUnit,
                 case VOLTAGE -> "voltage";
             };
         }
-        }
 
         /**
          * The quantity of a name.
