@@ -125,15 +125,16 @@ final class StabilisationPanel {
         int topOrder = chart.orders().isEmpty() ? 1 : chart.orders().get(chart.orders().size() - 1);
         double low = chart.bandLowHz();
         double high = chart.bandHighHz();
+        // The lowest order each pole stands at, in one pass over the points (a chart of 160 orders holds thousands).
+        java.util.Map<Pole, Integer> firstOrder = new java.util.HashMap<>();
         for (StabilisationPoint p : chart.points()) {
+            firstOrder.putIfAbsent(p.pole(), p.order());
             if (p.frequencyHz() >= low && p.frequencyHz() <= high) {
                 add(seriesOf(p.stabilityClass()), p.frequencyHz(), p.order(), p.pole());
             }
         }
         for (Pole chosen : choice.poles()) {
-            int order = chart.points().stream().filter(p -> p.pole().equals(chosen)).mapToInt(StabilisationPoint::order)
-                    .findFirst().orElse(topOrder);
-            add(0, chosen.frequencyHz(), order, chosen);
+            add(0, chosen.frequencyHz(), firstOrder.getOrDefault(chosen, topOrder), chosen);
         }
         for (int s = 0; s < NAMES.length; s++) {
             poles.getSeries(s).fireSeriesChanged();
