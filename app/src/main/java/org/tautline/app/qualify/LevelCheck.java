@@ -21,6 +21,7 @@ import org.tautline.analysis.specimen.LevelledMode;
 import org.tautline.analysis.specimen.LinearityCheck;
 import org.tautline.analysis.specimen.LinearityResult;
 import org.tautline.analysis.specimen.Specimen;
+import org.tautline.analysis.verdict.Figure;
 import org.tautline.driver.RigException;
 import org.tautline.driver.spi.Rig;
 import org.tautline.driver.sweep.LevelMode;
@@ -126,6 +127,10 @@ public final class LevelCheck {
         if (missing.isPresent()) {
             return Outcome.none(missing.get());
         }
+        Optional<String> failing = alreadyFailing(result);
+        if (failing.isPresent()) {
+            return Outcome.none(failing.get());
+        }
         if (main.levelMode() == LevelMode.FORCE) {
             return Outcome.none("the sweep held the force at a set level and the level check steps the drive voltage,"
                     + " so it was not run; a plan with a second force level gives it from its own passes");
@@ -153,6 +158,20 @@ public final class LevelCheck {
             return Outcome.none("the level check's sweep " + sweep.status().label() + " (" + sweep.reason() + ")");
         }
         return compare(result, f, sweep.passes().get(0), sweep.passes().get(1), "V");
+    }
+
+    /**
+     * Why the level check is not run on a specimen that already fails another limit, or empty: the verdict is FAIL
+     * whatever the shift, and the check would drive a failing specimen (a wire tensioned out of range, say) three times
+     * harder for nothing.
+     */
+    static Optional<String> alreadyFailing(QualificationResult result) {
+        return result.verdict().flatMap(v -> v.results().stream()
+                .filter(r -> r.outcome() == org.tautline.analysis.verdict.Outcome.FAIL
+                        && !r.limit().figureKey().equals(Figure.LEVEL_SHIFT.key()))
+                .findFirst())
+                .map(r -> "the specimen already fails its " + r.limit().name() + " limit, so the level check was not"
+                        + " run: it could not change the verdict and would drive a failing specimen three times harder");
     }
 
     /**

@@ -201,4 +201,27 @@ class DemoQualificationTest {
         assertEquals(150.0, stated.nominalTensionN(), 0.0);
         assertEquals(DemoScenario.TRUE_TENSION_N, truth.tensionN(), 0.0, "the demo wire is slacker than stated");
     }
+
+    @Test
+    void aSpecimenThatAlreadyFailsIsNotDrivenHarderForTheLevelCheck() {
+        // An invented tension window the demo wire (146.5 N) misses: the verdict is FAIL whatever the level check says.
+        org.tautline.analysis.verdict.Specification missed = new org.tautline.analysis.verdict.Specification(
+                "tension window the demo wire misses, invented", List.of(
+                        org.tautline.analysis.verdict.Limit.between("tension", "tensionN", "N", 100.0, 120.0),
+                        org.tautline.analysis.verdict.Limit.between("shift of f1 between test levels",
+                                "linearityShift1", "", -1e-3, 1e-3)));
+        QualificationResult failing = Qualification.analyse(DemoScenario.specimen(), outcome.result().receptance(),
+                outcome.result().sweep(), org.tautline.analysis.modal.ModalEstimator.defaults(),
+                java.util.Optional.of(missed), System.nanoTime());
+        assertEquals(Outcome.FAIL, failing.verdict().orElseThrow().outcome());
+        try (org.tautline.driver.sim.SimulatedRig sim = new org.tautline.driver.sim.SimulatedRig(
+                DemoScenario.simulation()); org.tautline.driver.sweep.RecordingRig rig =
+                new org.tautline.driver.sweep.RecordingRig(sim)) {
+            LevelCheck.Outcome check = LevelCheck.attempt(rig, failing, DemoScenario.plan(), SweepEventListener.NONE,
+                    SweepControl.none(), notice -> { });
+            assertTrue(check.result().isEmpty());
+            assertTrue(check.whyNone().startsWith("the specimen already fails its tension limit"), check.whyNone());
+            assertTrue(rig.commands.isEmpty(), "nothing was sent to the exciter: " + rig.commands);
+        }
+    }
 }
