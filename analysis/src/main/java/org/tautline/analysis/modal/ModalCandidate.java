@@ -59,46 +59,6 @@ final class ModalCandidate {
     }
 
     /**
-     * LSFD on the poles, then the joint refinement with at most {@value #ITERATIONS} iterations.
-     *
-     * @param h the measured receptance
-     * @param poles the candidate's poles
-     * @param options the refinement options of the fit
-     * @return the refined candidate, or null when it fails or leaves a mode narrower than the lines resolve (see
-     *     {@link ModalEstimator#isResolved}): a "mode" a few millihertz wide is how a fit absorbs one disturbed
-     *     line, not a resonance
-     */
-    static ModalRefinementResult refit(Frf h, List<Pole> poles, ModalRefinementOptions options) {
-        return refit(h, poles, options, ITERATIONS, 0);
-    }
-
-    /**
-     * LSFD on the poles, then the joint refinement with at most the given iterations.
-     *
-     * @param h the measured receptance
-     * @param poles the candidate's poles
-     * @param options the refinement options of the fit
-     * @param iterations most refinement iterations
-     * @return the refined candidate, or null as for {@link #refit(Frf, List, ModalRefinementOptions)}
-     */
-    static ModalRefinementResult refit(Frf h, List<Pole> poles, ModalRefinementOptions options, int iterations) {
-        return refit(h, poles, options, iterations, 0);
-    }
-
-    private static ModalRefinementResult refit(Frf h, List<Pole> poles, ModalRefinementOptions options, int iterations,
-                                               int added) {
-        ModalRefinementResult next;
-        try {
-            LsfdResult start = Lsfd.fit(h, poles, options.lines());
-            next = ModalRefinement.refine(h, start.modes(), start.residualTerms(),
-                    options.withMaxIterations(Math.min(options.maxIterations(), iterations)));
-        } catch (AnalysisException e) {
-            return null;
-        }
-        return checked(h, next, poles.subList(poles.size() - added, poles.size()), options);
-    }
-
-    /**
      * A candidate with new poles, tried in two stages. First a local fit: the modes of the current model far from the
      * new poles are held (their response taken off the measured one), and the new poles, the nearby modes, the residual
      * terms and the coefficients of the poles beyond the band are fitted (LSFD, then the joint refinement) to what is
