@@ -14,7 +14,8 @@ import org.tautline.driver.sweep.SweepControl;
  * at once from the hook's thread where the rig allows it (a serial rig does), and the sweep ramps down and ends
  * as cancelled before its next block. The hook then waits (at most {@value #HOLD_S} s) until {@link #close()} is
  * called, which the command does after it has journaled the end and printed how to resume, so nothing is cut
- * short by the process ending.
+ * short by the process ending; {@link #close()} then keeps the command from returning, so the process ends with the
+ * signal's status (128 + its number) and not with the command's own.
  */
 final class SignalStop implements AutoCloseable {
     /** Longest time the ending process waits for the sweep to wind down and the command to report, s. */
@@ -24,6 +25,8 @@ final class SignalStop implements AutoCloseable {
 
     private final SweepControl control = new SweepControl();
     private final CountDownLatch reported = new CountDownLatch(1);
+    /** Set when the hook ran: the process is ending on a signal. */
+    private volatile boolean signalled;
 
     /** Installs the shutdown hook. */
     SignalStop() {
@@ -31,6 +34,7 @@ final class SignalStop implements AutoCloseable {
             if (reported.getCount() == 0) {
                 return;
             }
+            signalled = true;
             try {
                 control.stopNow(REASON);
             } catch (RuntimeException e) {
@@ -59,5 +63,19 @@ final class SignalStop implements AutoCloseable {
     @Override
     public void close() {
         reported.countDown();
+        if (signalled) {
+            // The process is ending on the signal and its exit status is the signal's (128 + its number), which the
+            // ending JVM gives once the hook returns. Returning here would let the command's own status (cancelled)
+            // race it to the exit, so this thread waits for the end instead, its report already written.
+            System.out.flush();
+            System.err.flush();
+            while (true) {
+                try {
+                    Thread.sleep(Long.MAX_VALUE);
+                } catch (InterruptedException e) {
+                    // Keep waiting: the JVM ends the process.
+                }
+            }
+        }
     }
 }
