@@ -2,7 +2,6 @@ package org.tautline.app.qualify;
 
 import java.util.Optional;
 
-import org.tautline.analysis.specimen.LinearityResult;
 import org.tautline.analysis.specimen.Specimen;
 import org.tautline.analysis.verdict.Specification;
 import org.tautline.driver.sim.SimulatedRig;
@@ -73,11 +72,8 @@ public final class DemoRun {
         if (!sweep.completed()) {
             throw new SweepStoppedException(sweep);
         }
-        QualificationResult result = Qualification.analyse(stated, sweep, specification, startNs);
-        Optional<LinearityResult> linearity = LevelCheck.run(rig, result, plan, SweepEventListener.NONE, control);
-        if (linearity.isPresent()) {
-            result = Qualification.withLinearity(result, linearity.get(), Optional.of(specification));
-        }
+        QualificationResult result = RigQualification.of(rig, sweep, stated, Optional.of(specification), control,
+                notice -> { }, startNs);
         return new DemoOutcome(result, truth);
     }
 }

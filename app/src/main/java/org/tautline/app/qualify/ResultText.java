@@ -158,7 +158,8 @@ public final class ResultText {
             l.shifts().forEach(h -> out.append(String.format(Locale.ROOT,
                     "  level check, harmonic %d: %s -> %s, relative shift %s (Kirchhoff-Carrier predicts %s)%n",
                     h.harmonic(), f.value(h.firstFrequencyHz(), "Hz"), f.value(h.secondFrequencyHz(), "Hz"),
-                    f.withUncertainty(h.relativeShift(), h.relativeShiftStd(), ""), f.number(h.predictedRelativeShift()))));
+                    f.withUncertainty(h.relativeShift(), h.relativeShiftStd(), ""),
+                    f.valueLike(h.predictedRelativeShift(), h.relativeShiftStd(), ""))));
             l.findings().forEach(x -> out.append("  ").append(f.inStyle(x)).append('\n'));
         });
     }

@@ -6,16 +6,16 @@ import java.util.concurrent.ExecutionException;
 import java.time.Instant;
 
 import javax.swing.JOptionPane;
+import javax.swing.SwingUtilities;
 import javax.swing.SwingWorker;
 import javax.swing.Timer;
 
 import org.tautline.analysis.frf.Frf;
 import org.tautline.analysis.modal.ModalEstimator;
-import org.tautline.analysis.specimen.LinearityResult;
 import org.tautline.app.SafetyNotice;
-import org.tautline.app.qualify.LevelCheck;
 import org.tautline.app.qualify.Qualification;
 import org.tautline.app.qualify.QualificationResult;
+import org.tautline.app.qualify.RigQualification;
 import org.tautline.app.ui.results.ResultOrigin;
 import org.tautline.app.ui.run.ProgressText;
 import org.tautline.app.ui.run.RigConnection;
@@ -269,13 +269,11 @@ final class RunController {
                 if (!sweep.completed()) {
                     return Optional.empty();
                 }
-                QualificationResult result = Qualification.analyse(setup.specimen(), sweep, setup.specification(),
-                        startNs);
-                Optional<LinearityResult> linearity = LevelCheck.run(sweepRig, result, setup.plan(), e -> { },
-                        s.control());
-                return Optional.of(linearity.isPresent()
-                        ? Qualification.withLinearity(result, linearity.get(), Optional.of(setup.specification()))
-                        : result);
+                return Optional.of(RigQualification.of(sweepRig, sweep, setup.specimen(),
+                        Optional.of(setup.specification()), s.control(), notice -> SwingUtilities.invokeLater(() -> {
+                            parts.status().progress(-1, "level check: sweeping the fundamental again");
+                            parts.status().message(Character.toUpperCase(notice.charAt(0)) + notice.substring(1));
+                        }), startNs));
             }
 
             @Override

@@ -1,6 +1,7 @@
 package org.tautline.app.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
@@ -43,6 +44,10 @@ class DemoSeedCommandTest {
             tensionFails |= "tensionN".equals(limit.get("figure").asText()) && "FAIL".equals(limit.get("outcome").asText());
         }
         assertTrue(tensionFails, "the tension limit (135 .. 165 N) fails: " + root.get("verdict"));
+        JsonNode recorded = ResultJson.MAPPER.readTree(run.resolve("result.json").toFile());
+        assertFalse(recorded.has("linearity"), "a failing specimen is not driven harder for the level check");
+        assertTrue(recorded.path("whyNoLevelCheck").asText().startsWith("the specimen already fails its tension limit"),
+                "the result says why there is no level check: " + recorded.path("whyNoLevelCheck"));
 
         assertEquals(root.get("truth"), ResultJson.MAPPER.readTree(run.resolve("truth.json").toFile()));
         assertEquals("DEMO-TW-S0005", ResultJson.MAPPER.readTree(run.resolve("specimen.json").toFile()).get("id").asText());

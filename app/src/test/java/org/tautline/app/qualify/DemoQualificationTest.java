@@ -158,6 +158,10 @@ class DemoQualificationTest {
                 4 * shift.relativeShiftStd() + 0.3 * Math.abs(shift.predictedRelativeShift()),
                 "measured shift against the Kirchhoff-Carrier backbone prediction");
         assertTrue(outcome.result().linearity().get().linear(), "linear at the test level (shift below 1e-3)");
+        // The demo wire's principal axis lies 25 degrees from the drive, so the second polarisation of harmonic 1 is
+        // excited too and stretches the wire beyond the one-polarisation prediction; the result says so.
+        assertTrue(outcome.result().linearity().get().findings().stream().anyMatch(f -> f.contains("second polarisation")
+                && f.contains("somewhat above the prediction")), outcome.result().linearity().get().findings().toString());
     }
 
     @Test
