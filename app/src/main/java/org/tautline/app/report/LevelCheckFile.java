@@ -71,8 +71,17 @@ public final class LevelCheckFile {
                     s.number("secondFrequencyHz"), s.number("relativeShift"), s.number("relativeShiftStd", Double.NaN),
                     s.number("predictedRelativeShift", Double.NaN), s.bool("significant")));
         }
-        return Optional.of(new LinearityResult(shifts, linear, List.of("level check at two drive levels (recorded in "
-                + resultJson.getFileName() + "): " + (linear ? "linear" : "not linear"))));
+        String recorded = "recorded in " + resultJson.getFileName();
+        List<String> findings = new ArrayList<>();
+        List<String> stated = block.has("findings") ? block.texts("findings") : List.of();
+        if (stated.isEmpty()) {
+            // A file written before the check's own words were recorded.
+            findings.add("level check at two drive levels (" + recorded + "): " + (linear ? "linear" : "not linear"));
+        } else {
+            findings.add(stated.get(0) + " (" + recorded + ")");
+            findings.addAll(stated.subList(1, stated.size()));
+        }
+        return Optional.of(new LinearityResult(shifts, linear, findings));
     }
 
     static Optional<String> sweepLine(Path resultJson, JsonFields root) {

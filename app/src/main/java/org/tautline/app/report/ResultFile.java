@@ -117,6 +117,8 @@ public final class ResultFile {
         r.linearity().ifPresent(l -> {
             ObjectNode linearity = root.putObject("linearity");
             linearity.put("linear", l.linear());
+            ArrayNode findings = linearity.putArray("findings");
+            l.findings().forEach(findings::add);
             ArrayNode shifts = linearity.putArray("shifts");
             l.shifts().forEach(h -> {
                 ObjectNode node = shifts.addObject();
