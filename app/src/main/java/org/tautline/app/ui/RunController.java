@@ -272,6 +272,8 @@ final class RunController {
                 return Optional.of(RigQualification.of(sweepRig, sweep, setup.specimen(),
                         Optional.of(setup.specification()), s.control(), notice -> SwingUtilities.invokeLater(() -> {
                             parts.status().progress(-1, "level check: sweeping the fundamental again");
+                            parts.run().progress(1, "sweep complete; level check: the fundamental again at two drive"
+                                    + " levels");
                             parts.status().message(Character.toUpperCase(notice.charAt(0)) + notice.substring(1));
                         }), startNs));
             }
@@ -314,6 +316,11 @@ final class RunController {
                     Optional<QualificationResult> result = get();
                     if (result.isPresent()) {
                         parts.run().progress(1, "sweep complete");
+                        parts.status().message(result.get().linearity().isPresent()
+                                ? "Finished: the sweep and the level check are done, the output is off, and the result"
+                                + " is on the Results screen."
+                                : "Finished: the sweep is done (no level check; the result says why), the output is"
+                                + " off, and the result is on the Results screen.");
                         results.show(result.get(), ResultOrigin.sweep(sweepStartedAt, connectedDriver, sweepRig.identity()));
                     } else if (s.state() == SweepSession.State.PAUSED) {
                         SweepResult partial = s.partial().orElseThrow();
